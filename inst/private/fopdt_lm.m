@@ -1,0 +1,68 @@
+## -*- texinfo -*-
+## @deftypefn {} {[@var{p}, @var{info}] =} fopdt_lm (@var{fun}, @var{p0}, @var{maxiter})
+## Minimise the sum of squares of the residual vector @code{fun (p)} by
+## Levenberg-Marquardt steps with Marquardt's diagonal scaling and a
+## central-difference Jacobian.  @var{info} has fields J (Jacobian of the
+## residuals at @var{p}), ssr, iterations and converged.
+## @end deftypefn
+
+function [p, info] = fopdt_lm (fun, p0, maxiter)
+
+  p = p0(:);
+  r = fun (p);
+  ssr = r' * r;
+  mu = 1e-3;
+  converged = false;
+  it = 0;
+  while (it < maxiter && ! converged)
+    it += 1;
+    J = jacobian (fun, p);
+    A = J' * J;
+    g = J' * r;
+    ## Floor the scaling so a column that has gone flat stays solvable.
+    d = diag (A);
+    d = max (d, 1e-12 * max ([d; realmin]));
+    accepted = false;
+    while (mu < 1e12)
+      dp = -(A + mu * diag (d)) \ g;
+      pn = p + dp;
+      rn = fun (pn);
+      ssrn = rn' * rn;
+      if (isfinite (ssrn) && ssrn < ssr)
+        accepted = true;
+        mu = max (mu / 3, 1e-12);
+        break;
+      endif
+      mu *= 4;
+    endwhile
+    if (! accepted)
+      ## No step lowers the cost: a (numerical) minimum.
+      converged = true;
+      break;
+    endif
+    small_step = norm (dp ./ max (abs (p), 1)) < 1e-10;
+    small_gain = (ssr - ssrn) <= 1e-14 * ssr;
+    p = pn;
+    r = rn;
+    ssr = ssrn;
+    converged = small_step || small_gain;
+  endwhile
+
+  info.J = jacobian (fun, p);
+  info.ssr = ssr;
+  info.iterations = it;
+  info.converged = converged;
+
+endfunction
+
+function J = jacobian (fun, p)
+
+  np = numel (p);
+  for i = np:-1:1
+    h = 1e-5 * max (abs (p(i)), 1);
+    e = zeros (np, 1);
+    e(i) = h;
+    J(:,i) = (fun (p + e) - fun (p - e)) / (2 * h);
+  endfor
+
+endfunction
