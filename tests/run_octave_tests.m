@@ -26,10 +26,10 @@ function vn_test_setup (root)
   if (isfolder (octdir))
     addpath (octdir);
   endif
+  warning ("off", "Octave:gnuplot-graphics");
   if (any (strcmp (available_graphics_toolkits (), "gnuplot")))
     graphics_toolkit ("gnuplot");
   endif
-  warning ("off", "Octave:gnuplot-graphics");
   set (0, "defaultfigurevisible", "off");
 endfunction
 

@@ -31,7 +31,10 @@ if [ "${1:-}" = "--one" ]; then
     else
       why="octave-cli exited with status $rc"
     fi
-    read -r p f s _ <"$resdir/$name.res" 2>/dev/null || { p=0; f=0; s=0; }
+    p=0; f=0; s=0
+    if [ -s "$resdir/$name.res" ]; then
+      read -r p f s _ <"$resdir/$name.res"
+    fi
     [ "$f" -gt 0 ] || f=1
     echo "$p $f $s $file $out $why" >"$resdir/$name.res"
     echo "  FAIL $file: $why"

@@ -34,7 +34,7 @@ for r in "${res[@]}"; do
     fi
     if [ "$out" != "$log" ] && [ -s "$out" ]; then
       echo "---- output of the run (last $maxlines lines) ----"
-      grep -v "ignoring const execution_exception& while preparing to exit" \
+      grep -vE "ignoring const execution_exception& while preparing to exit|^  (ok  |FAIL) " \
         "$out" | tail -n "$maxlines" || true
     fi
   fi
