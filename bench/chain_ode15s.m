@@ -99,12 +99,11 @@ endfunction
 %! ## Two tanks approach h = [2 1] m, where each orifice carries F0 = c at
 %! ## dH = 1 m (orifice law, common practice); after 3600 s chain_floor gives
 %! ## h = [1.99933 0.99959], still settling, hence the 2e-3 tolerance.
-%! [t, h, wall, stats] = chain_ode15s (2);
+%! [t, h, ~, stats] = chain_ode15s (2);
 %! assert (h(end,:), [2 1], 2e-3);
 %! assert (h(1,:), [1 1]);
 %! assert (stats.jac_calls > 0);
 %! assert (stats.steps > 10);
-%! assert (wall > 0);
 
 %!error <N \(number of tanks\)> chain_ode15s (0)
 %!error <N \(number of tanks\)> chain_ode15s (2.5)
