@@ -308,3 +308,59 @@ function [t, u, y] = check_data (t, u, y)
   endif
 
 endfunction
+
+%!demo
+%! ## Invented test: an invented dairy's pasteuriser balance tank, feed
+%! ## pump speed stepped twice, level (m) logged every 5 s with noise.
+%! t = (0:5:1800)';
+%! u = 0.6 + 0.1 * (t >= 120) - 0.15 * (t >= 900);
+%! s1 = max (t - 120 - 35, 0);  s2 = max (t - 900 - 35, 0);
+%! y = 1.4 + 2.5 * (0.1 * (1 - exp (-s1 / 240)) - 0.15 * (1 - exp (-s2 / 240)));
+%! randn ("state", 7);
+%! y += 0.004 * randn (size (t));
+%! m = vn_fopdt (t, u, y);
+%! printf ("gain %.4g +- %.2g m per unit speed\n", m.gain, m.stderr.gain);
+%! printf ("tau %.4g +- %.2g s, dead time %.4g +- %.2g s, rmse %.2g m\n", ...
+%!         m.tau, m.stderr.tau, m.deadtime, m.stderr.deadtime, m.rmse);
+%! plot (t, y, "k.", t, m.fitted, "k-");
+%! xlabel ("time (s)"); ylabel ("level (m)");
+%! legend ("invented data", "FOPDT fit", "location", "northeast");
+
+## Unit-gain step of 2 at t = 60 s; K 0.5, tau 120 s, theta 30 s.
+%!shared t, u, y
+%! t = (0:2:900)';
+%! u = 1 + 2 * (t >= 60);
+%! y = 3 + 0.5 * 2 * (1 - exp (-max (t - 60 - 30, 0) / 120));
+
+%!test
+%! ## Noiseless step: the least-squares fit recovers the model exactly
+%! m = vn_fopdt (t, u, y);
+%! assert ([m.gain, m.tau, m.deadtime], [0.5, 120, 30], -1e-4);
+%! assert ([m.baseline.u0, m.baseline.y0, m.baseline.t0], [1, 3, 60], 1e-6);
+%! assert (m.type, "fopdt");
+%! assert (m.rmse < 1e-8);
+%! assert (m.fitted, y, 1e-8);
+
+%!test
+%! ## Smith's two-point method (Digital Computer Process Control, 1972)
+%! ## is exact for a true FOPDT; here the record ends at 7 tau after the
+%! ## step, so the final value and hence tau come out slightly low.
+%! m = vn_fopdt (t, u, y, "twopoint");
+%! assert (m.method, "smith");
+%! assert ([m.gain, m.tau, m.deadtime], [0.5, 120, 30], -5e-3);
+
+%!test
+%! ## Integrating: k' 2e-3 per s, theta 20 s, steps +0.1 then -0.2
+%! ui = 0.5 + 0.1 * (t >= 100) - 0.2 * (t >= 500);
+%! yi = 1.2 + 2e-3 * (0.1 * max (t - 120, 0) - 0.2 * max (t - 520, 0));
+%! m = vn_fopdt (t, ui, yi, "integrating");
+%! assert ([m.gain, m.deadtime], [2e-3, 20], -1e-4);
+%! assert (m.type, "integrating");
+
+%!error <same length; T has 451 samples, U 450> vn_fopdt (t, u(1:end-1), y)
+%!error <U never changes> vn_fopdt (t, ones (size (t)), y)
+%!error <strictly increasing> vn_fopdt (t([1 3 2 4:end]), u, y)
+%!error <NaN \(or not finite\) at every sample> vn_fopdt (t, u, NaN (size (t)))
+%!error <too few points: Y has 5> vn_fopdt ((1:5)', [0 1 1 1 1]', (1:5)')
+%!error <unknown option "cubic"> vn_fopdt (t, u, y, "cubic")
+%!error <Invalid call> vn_fopdt (t, u)

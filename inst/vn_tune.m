@@ -167,3 +167,105 @@ function opt = parse_options (args)
   endwhile
 
 endfunction
+
+%!demo
+%! ## Invented case: hot-liquor tank temperature at an invented brewery,
+%! ## steam valve (%) to temperature (degC), model from a step test.
+%! m = struct ("gain", 0.42, "tau", 540, "deadtime", 45);
+%! pi_simc = vn_tune (m, "simc")
+%! pid_imc = vn_tune (m, "imc")
+%! printf ("SIMC PI: Kc %.3g %%/degC, Ti %.0f s\n", pi_simc.Kc, pi_simc.Ti);
+%! printf ("IMC PID: Kc %.3g %%/degC, Ti %.0f s, Td %.1f s\n", ...
+%!         pid_imc.Kc, pid_imc.Ti, pid_imc.Td);
+
+## Worked model K 2, tau 10 min, theta 1 min (REFERENCES.md).
+%!shared m
+%! m = struct ("gain", 2, "tau", 10, "deadtime", 1);
+
+%!test
+%! ## Skogestad, J. Process Control 13 (2003): SIMC PI, tauc = theta
+%! p = vn_tune (m, "simc");
+%! assert ([p.Kc, p.Ti, p.Td], [2.5, 8, 0], 1e-12);
+%! assert (p.form, "ideal");
+%! assert (p.tauc, 1);
+%! assert (p.action, "reverse");
+
+%!test
+%! ## Rivera, Morari and Skogestad, Ind. Eng. Chem. Process Des. Dev. 25 (1986)
+%! p = vn_tune (m, "imc", "lambda", 1);
+%! assert ([p.Kc, p.Ti, p.Td], [3.5, 10.5, 0.47619], 1e-5);
+
+%!test
+%! ## Ziegler and Nichols, Trans. ASME 64 (1942), reaction curve
+%! p = vn_tune (m, "zn");
+%! assert ([p.Kc, p.Ti, p.Td], [4.5, 3.3, 0], 1e-12);
+%! p = vn_tune (m, "zn", "type", "pid");
+%! assert ([p.Kc, p.Ti, p.Td], [6, 2, 0.5], 1e-12);
+
+%!test
+%! ## Lambda tuning, integrating process, arrest time (memory)
+%! mi = struct ("type", "integrating", "gain", 0.1, "deadtime", 1);
+%! p = vn_tune (mi, "lambda", "lambda", 10);
+%! assert (p.Ti, 21, 1e-12);
+%! assert (p.Kc, 1.7355, 1e-4);
+
+%!test
+%! ## Lambda tuning, self-regulating: Kc = tau/(K (lambda + theta)), Ti = tau
+%! p = vn_tune (m, "lambda", "lambda", 4);
+%! assert ([p.Kc, p.Ti, p.Td], [1, 10, 0], 1e-12);
+%! p = vn_tune (m, "lambda");          # default lambda 3 tau = 30
+%! assert ([p.lambda, p.Kc], [30, 10 / 62], 1e-12);
+
+%!test
+%! ## Skogestad (2003) SIMC integrating: Kc = 1/(k' (tauc + theta)),
+%! ## Ti = 4 (tauc + theta) (memory)
+%! mi = struct ("type", "integrating", "gain", 0.1, "deadtime", 1);
+%! p = vn_tune (mi, "simc");
+%! assert ([p.Kc, p.Ti], [5, 8], 1e-12);
+%! p = vn_tune (mi, "simc", "tauc", 3);
+%! assert ([p.Kc, p.Ti], [2.5, 16], 1e-12);
+
+%!test
+%! ## Skogestad (2003) half rule then SIMC PI: tau 10 + 1, theta 1 + 1
+%! p = vn_tune (struct ("gain", 2, "tau1", 10, "tau2", 2, "deadtime", 1), "simc");
+%! assert ([p.Kc, p.Ti], [11 / 8, 11], 1e-12);
+
+%!test
+%! ## Skogestad (2003) series SIMC PID, Td = tau2; ideal form by
+%! ## Kc (1 + Td/Ti), Ti + Td, Ti Td/(Ti + Td) (common practice)
+%! p = vn_tune (struct ("gain", 2, "tau1", 10, "tau2", 3, "deadtime", 1), "simc", "pid");
+%! assert ([p.Kc, p.Ti, p.Td], [2.5, 8, 3], 1e-12);
+%! assert (p.form, "series");
+%! assert ([p.ideal.Kc, p.ideal.Ti, p.ideal.Td], [3.4375, 11, 24 / 11], 1e-12);
+
+%!test
+%! ## IMC default lambda max (0.25 tau, 0.8 theta) = 2.5
+%! p = vn_tune (m, "imc");
+%! assert ([p.lambda, p.Kc], [2.5, 1.75], 1e-12);
+
+%!test
+%! ## Negative gain: Kc takes the sign of 1/K, action direct
+%! warning ("off", "vesselnet:tune-unreliable", "local");
+%! p = vn_tune (struct ("gain", -2, "tau", 10, "deadtime", 1), "simc");
+%! assert (p.Kc, -2.5, 1e-12);
+%! assert (p.action, "direct");
+
+%!test
+%! ## Ziegler-Nichols P, integrating: Kc = 1/(k' theta)
+%! p = vn_tune (struct ("type", "integrating", "gain", 0.1, "deadtime", 2), "zn", "p");
+%! assert ([p.Kc, p.Ti, p.Td], [5, Inf, 0]);
+
+%!warning <negative> vn_tune (struct ("gain", -2, "tau", 10, "deadtime", 1), "imc");
+%!warning <dead time / time constant is 2> vn_tune (struct ("gain", 2, "tau", 1, "deadtime", 2), "zn");
+%!warning <below 0.8> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 5), "imc", "lambda", 1);
+%!error <not defined for model DEADTIME 0> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 0), "zn")
+%!error <give option "tauc"> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 0), "simc")
+%!error <needs option "lambda"> vn_tune (struct ("type", "integrating", "gain", 0.1, "deadtime", 1), "lambda")
+%!error <TAU2> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 1), "simc", "pid")
+%!error <unknown METHOD "pidx"> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 1), "pidx")
+%!error <GAIN is 0> vn_tune (struct ("gain", 0, "tau", 10, "deadtime", 1), "simc")
+%!error <DEADTIME is -1> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", -1), "simc")
+%!error <no field deadtime> vn_tune (struct ("gain", 2, "tau", 10), "simc")
+%!error <self-regulating models only> vn_tune (struct ("type", "integrating", "gain", 0.1, "deadtime", 1), "imc")
+%!error <TAUC must be a positive> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 1), "simc", "tauc", -1)
+%!error <Invalid call> vn_tune (struct ("gain", 2, "tau", 10, "deadtime", 1))
