@@ -34,10 +34,11 @@
 ## time after which the response stays within 2 % of the final change
 ## (the last exit from the band); NaN when still outside at the last sample.
 ## @item overshoot
-## peak beyond the final change, percent of the final change (0 if none).
+## peak beyond the final change, percent of the final change (0 if none);
+## the peak is refined by a parabola through the largest sample and its
+## neighbours.
 ## @item peak
-## time of that peak, refined by a parabola through three samples; NaN
-## without overshoot.
+## time of that peak; NaN without overshoot.
 ## @item undershoot
 ## largest move opposite to the final change, percent of the final change.
 ## @item inverse
@@ -146,9 +147,10 @@ function m = step_metrics (t, y, varargin)
   m.rise = first_crossing (t, r, 0.9) - first_crossing (t, r, 0.1);
   m.settle = settling (t, r, 0.02);
   [rmax, kmax] = max (r);
-  m.overshoot = 100 * max (0, rmax - 1);
+  m.overshoot = 0;
   if (rmax > 1)
-    m.peak = peak_time (t, r, kmax);
+    [m.peak, rmax] = peak_of (t, r, kmax);
+    m.overshoot = 100 * (rmax - 1);
   endif
   m.undershoot = 100 * max (0, -min (r));
   kout = find (abs (r) > 0.01, 1);
@@ -183,12 +185,15 @@ function ts = settling (t, r, tol)
 endfunction
 
 ## Vertex of the parabola through the largest sample and its neighbours.
-function tp = peak_time (t, r, k)
+function [tp, rp] = peak_of (t, r, k)
   tp = t(k);
+  rp = r(k);
   if (k > 1 && k < numel (r))
     c = polyfit (t(k-1:k+1) - t(k), r(k-1:k+1), 2);
     if (c(1) < 0)
-      tp = t(k) - c(2) / (2 * c(1));
+      dt = -c(2) / (2 * c(1));
+      tp = t(k) + dt;
+      rp = max (rp, polyval (c, dt));
     endif
   endif
 endfunction
