@@ -42,7 +42,9 @@
 ## the process gain at low frequency picks its action, so that the loop is
 ## negative feedback: @qcode{"reverse"} (output falls as the measurement
 ## rises) for a positive process gain, @qcode{"direct"} for a negative one.
-## Delay is not modelled.  @code{fr.loop} holds:
+## A field @code{action} of @var{pid} that disagrees gives a warning
+## (id @qcode{"vesselnet:action"}).  Delay is not modelled.
+## @code{fr.loop} holds:
 ##
 ## @table @code
 ## @item L, magnitude, phase
@@ -340,6 +342,13 @@ function lp = loop_margins (A, b, c, d, w, g, pid)
   else
     action = "direct";
   endif
+  if (isfield (pid, "action") && ischar (pid.action)
+      && ! strcmpi (pid.action, action))
+    warning ("vesselnet:action",
+             ["vn_frequency: controller action \"%s\" would give positive ", ...
+              "feedback with this process gain (%g); margins are for \"%s\" action"],
+             pid.action, g0, action);
+  endif
   L = sgn * g .* ctrl (1i * w);
   Lat = @(x) sgn * at (A, b, c, d, 1i * x) * ctrl (1i * x);
 
@@ -483,6 +492,10 @@ endfunction
 %! assert (fr.loop.gm, 4, 1e-9);
 %! assert (fr.loop.gm_db, 20 * log10 (4), 1e-8);
 %! assert (fr.loop.action, "direct");
+
+%!warning <positive feedback>
+%! lin = struct ("A", -1, "B", 1, "C", 1, "D", 0);
+%! vn_frequency (lin, "controller", struct ("Kc", 1, "action", "direct"));
 
 %!error <sizes of LIN.A> vn_frequency (struct ("A", 1, "B", [1 1], "C", 1, "D", 0))
 %!error <positive finite> vn_frequency (struct ("A", -1, "B", 1, "C", 1, "D", 0), [-1 1])
