@@ -10,7 +10,8 @@
 ## RESULTDIR/<name>.log (the failing blocks, from test's log output) and
 ## RESULTDIR/<name>.res, one line "PASSED FAILED SKIPPED FILE LOG NOTE"
 ## that tools/sum_results.sh adds up.  <name> is FILE with "/" -> "__".
-## The oct-files are taken from $VN_OCTDIR (default build/oct).
+## The path gets inst/, the oct-files from $VN_OCTDIR (default build/oct)
+## and, last, tests/octave/ for shared fixtures.
 
 1;
 
@@ -19,6 +20,8 @@ function vn_test_setup (root)
   more off;
   page_screen_output (false);
   addpath (fullfile (root, "inst"));
+  ## Shared fixtures of the integration tests, if any, live beside them.
+  addpath (fullfile (root, "tests", "octave"), "-end");
   octdir = getenv ("VN_OCTDIR");
   if (isempty (octdir))
     octdir = fullfile (root, "build", "oct");
