@@ -38,9 +38,10 @@
 ## Between samples the input is held (zero-order hold, the default, since
 ## plant inputs are usually stepped: option @qcode{"hold"}), or interpolated
 ## linearly with option @qcode{"linear"}.  The model response is computed
-## exactly for that input by superposing the closed-form step (or ramp)
-## responses, with the dead time a continuous shift, not rounded to the
-## sampling.  The parameters are found by Levenberg-Marquardt least squares,
+## exactly for that input: the closed-form step (or ramp) responses are
+## superposed through the exact exponential recursion between samples
+## (@code{filter} on uniform sampling), with the dead time a continuous
+## shift, not rounded to the sampling.  The parameters are found by Levenberg-Marquardt least squares,
 ## with time constants and dead time kept positive by a log transform,
 ## started from the better of Smith's estimate on the first step and a coarse
 ## search in which gain and baseline are solved linearly.
