@@ -1,0 +1,176 @@
+## -*- texinfo -*-
+## @deftypefn  {} {@var{res} =} vn_simulate (@var{net}, @var{tspan})
+## @deftypefnx {} {@var{res} =} vn_simulate (@var{net}, @var{tspan}, @var{u})
+## @deftypefnx {} {@var{res} =} vn_simulate (@dots{}, @var{name}, @var{value}, @dots{})
+## Simulate a network in time with the compiled core.
+##
+## @var{tspan} is @code{[t0 tf]} in seconds (outputs every @qcode{"dt"}
+## seconds, default @code{(tf - t0)/500}) or a vector of three or more
+## increasing output times.  @var{u} holds signals made by
+## @code{vn_signal}; inputs without a signal keep their declared values.
+## Every breakpoint of a signal is met exactly: the integrator stops and
+## restarts there.
+##
+## The result @var{res} has @code{res.t} (column, s) and one field per
+## unit holding its outputs and inputs as columns, e.g.
+## @code{res.T1.level}, @code{res.T1.spill}, @code{res.O1.flow},
+## @code{res.LV1.opening}; @code{res.units} gives their units of measure,
+## @code{res.x} the states (@code{res.states} their names) and
+## @code{res.stats} the integrator's counts and wall time.
+##
+## Options:
+## @table @asis
+## @item @qcode{"dt"}
+## output interval (s).
+## @item @qcode{"initial"}
+## an operating point from @code{vn_steady} (uses its @code{x}), or a state
+## vector; default: the levels declared on the tanks.
+## @item @qcode{"reltol"}, @qcode{"abstol"}
+## integrator tolerances (default 1e-6 relative, 1e-8 absolute on volumes
+## in m3).
+## @item @qcode{"solver"}
+## @qcode{"auto"} (dense up to 100 states, else KLU sparse), @qcode{"dense"}
+## or @qcode{"klu"}.
+## @item @qcode{"maxsteps"}
+## steps allowed between two outputs (default 100000).
+## @item @qcode{"maxstep"}
+## largest step (s), default none.
+## @item @qcode{"verbose"}
+## print the integrator's counts when done.
+## @end table
+##
+## Integration is CVODES' BDF method with the analytic Jacobian.  When the
+## integrator fails, the error says at what time and in which unit.
+## Ctrl-C stops a run.
+##
+## The result is a model's prediction: validate the model against plant
+## data before using it to judge a real upset, and never in place of
+## overfill protection or other safety systems.
+## @seealso{vn_signal, vn_steady, vn_plot, vn_network}
+## @end deftypefn
+
+function res = vn_simulate (net, tspan, varargin)
+  if (nargin < 2)
+    print_usage ();
+  endif
+  u = [];
+  args = varargin;
+  if (! isempty (args) && ! ischar (args{1}))
+    u = args{1};
+    args(1) = [];
+  endif
+  opt = parse_options (args);
+  pk = vn_pack (net);
+  if (! isnumeric (tspan) || ! isreal (tspan) || numel (tspan) < 2
+      || any (! isfinite (tspan)))
+    error ("Octave:invalid-input-arg",
+           "vn_simulate: TSPAN must be [t0 tf] or a vector of output times (s)");
+  endif
+  if (numel (tspan) == 2)
+    t0 = tspan(1);
+    tf = tspan(2);
+    if (! (tf > t0))
+      error ("Octave:invalid-input-arg",
+             "vn_simulate: TSPAN [t0 tf] needs tf > t0, got [%g %g]", t0, tf);
+    endif
+    dt = opt.dt;
+    if (isempty (dt))
+      dt = (tf - t0) / 500;
+    endif
+    if (! (isscalar (dt) && isreal (dt) && dt > 0 && isfinite (dt)))
+      error ("Octave:invalid-input-arg",
+             "vn_simulate: option \"dt\" must be a positive time step (s)");
+    endif
+    tout = (t0:dt:tf).';
+    if (tf - tout(end) > 1e-9 * max (1, abs (tf)))
+      tout(end+1) = tf;
+    endif
+  else
+    tout = tspan(:);
+    if (any (diff (tout) <= 0))
+      error ("Octave:invalid-input-arg",
+             "vn_simulate: output times must increase");
+    endif
+  endif
+  sig = vn_pack_signals (net, u, "vn_simulate");
+  x0 = initial_state (opt.initial);
+  so.reltol = opt.reltol;
+  so.abstol = opt.abstol;
+  so.solver = opt.solver;
+  so.maxsteps = opt.maxsteps;
+  so.maxstep = opt.maxstep;
+  [X, Y, stats, states] = __vn_simulate__ (pk, sig, tout, x0, so);
+  res = vn_results (net, tout, X, Y, states, u);
+  res.stats = stats;
+  res.net = net;
+  res.signals = u;
+  if (opt.verbose)
+    printf ("vn_simulate: %d steps, %d rhs, %d Jacobians, %d restarts, %s, %.3g s\n",
+            stats.steps, stats.rhs, stats.jac, stats.restarts, stats.solver,
+            stats.wall);
+  endif
+endfunction
+
+function opt = parse_options (args)
+  opt = struct ("dt", [], "initial", [], "reltol", 1e-6, "abstol", 1e-8,
+                "solver", 0, "maxsteps", 100000, "maxstep", 0,
+                "verbose", false);
+  if (mod (numel (args), 2) != 0)
+    error ("Octave:invalid-input-arg",
+           "vn_simulate: options come in name/value pairs");
+  endif
+  for i = 1:2:numel (args)
+    name = args{i};
+    val = args{i+1};
+    if (! ischar (name))
+      error ("Octave:invalid-input-arg",
+             "vn_simulate: option names must be strings");
+    endif
+    switch (lower (name))
+      case "dt"
+        opt.dt = val;
+      case "initial"
+        opt.initial = val;
+      case {"reltol", "abstol", "maxstep"}
+        if (! (isscalar (val) && isreal (val) && val > 0 && isfinite (val)))
+          error ("Octave:invalid-input-arg",
+                 "vn_simulate: option \"%s\" must be a positive number",
+                 lower (name));
+        endif
+        opt.(lower (name)) = val;
+      case "maxsteps"
+        if (! (isscalar (val) && val >= 1 && val == fix (val)))
+          error ("Octave:invalid-input-arg",
+                 "vn_simulate: option \"maxsteps\" must be a positive integer");
+        endif
+        opt.maxsteps = val;
+      case "solver"
+        codes = {"auto", "dense", "klu"};
+        j = find (strcmpi (codes, val));
+        if (! ischar (val) || isempty (j))
+          error ("Octave:invalid-input-arg",
+                 "vn_simulate: option \"solver\" must be \"auto\", \"dense\" or \"klu\"");
+        endif
+        opt.solver = j - 1;
+      case "verbose"
+        opt.verbose = logical (val);
+      otherwise
+        error ("Octave:invalid-input-arg",
+               "vn_simulate: unknown option \"%s\"; allowed: dt, initial, reltol, abstol, solver, maxsteps, maxstep, verbose",
+               name);
+    endswitch
+  endfor
+endfunction
+
+function x0 = initial_state (init)
+  if (isempty (init))
+    x0 = [];
+  elseif (isstruct (init) && isfield (init, "x"))
+    x0 = init.x(:);
+  elseif (isnumeric (init) && isreal (init))
+    x0 = init(:);
+  else
+    error ("Octave:invalid-input-arg",
+           "vn_simulate: option \"initial\" must be an operating point from vn_steady or a state vector");
+  endif
+endfunction

@@ -1,0 +1,100 @@
+/* Derivative linear forms and triplet buffers (see vn_internal.h). */
+#include <stdlib.h>
+#include "vn_internal.h"
+
+/* Every operation accepts d == NULL (derivatives not wanted), so the
+ * kinds write one code path for values and derivatives. */
+void vn_lf_zero (vn_lf *d)
+{
+  if (d)
+    d->n = 0;
+}
+
+static void lf_add (vn_lf *d, int col, int isp, double v)
+{
+  if (!d)
+    return;
+  /* merge a repeated column so long chains stay inside VN_LF */
+  for (int i = 0; i < d->n; i++)
+    if (d->col[i] == col && d->isp[i] == isp)
+      {
+        d->v[i] += v;
+        return;
+      }
+  if (d->n < VN_LF)
+    {
+      d->col[d->n] = col;
+      d->isp[d->n] = (unsigned char) isp;
+      d->v[d->n] = v;
+      d->n++;
+    }
+}
+
+void vn_lf_x (vn_lf *d, int col, double v) { lf_add (d, col, 0, v); }
+void vn_lf_p (vn_lf *d, int col, double v) { lf_add (d, col, 1, v); }
+
+void vn_lf_axpy (vn_lf *d, double a, const vn_lf *s)
+{
+  if (!d || !s)
+    return;
+  for (int i = 0; i < s->n; i++)
+    lf_add (d, s->col[i], s->isp[i], a * s->v[i]);
+}
+
+void vn_lf_scale (vn_lf *d, double a)
+{
+  if (!d)
+    return;
+  for (int i = 0; i < d->n; i++)
+    d->v[i] *= a;
+}
+
+int vn_trip_add (vn_trip *T, int r, int c, double v)
+{
+  if (T->n == T->cap)
+    {
+      long cap = T->cap ? 2 * T->cap : 256;
+      int *nr = realloc (T->r, (size_t) cap * sizeof *nr);
+      if (!nr)
+        return VN_ENOMEM;
+      T->r = nr;
+      int *nc = realloc (T->c, (size_t) cap * sizeof *nc);
+      if (!nc)
+        return VN_ENOMEM;
+      T->c = nc;
+      double *nv = realloc (T->v, (size_t) cap * sizeof *nv);
+      if (!nv)
+        return VN_ENOMEM;
+      T->v = nv;
+      T->cap = cap;
+    }
+  T->r[T->n] = r;
+  T->c[T->n] = c;
+  T->v[T->n] = v;
+  T->n++;
+  return VN_OK;
+}
+
+void vn_trip_free (vn_trip *T)
+{
+  free (T->r);
+  free (T->c);
+  free (T->v);
+  T->r = T->c = NULL;
+  T->v = NULL;
+  T->n = T->cap = 0;
+}
+
+/* Add sign * d to row `row`: state columns to tx, parameter columns to
+ * tp (either may be NULL). */
+void vn_emit (vn_net *net, int row, double sign, const vn_lf *d,
+              vn_trip *tx, vn_trip *tp)
+{
+  (void) net;
+  for (int i = 0; i < d->n; i++)
+    {
+      vn_trip *T = d->isp[i] ? tp : tx;
+      if (T)
+        vn_trip_add (T, row, d->col[i], sign * d->v[i]);
+    }
+}

@@ -1,0 +1,124 @@
+/* What every two-ended flow element shares: the driving head by the
+ * nozzle rule and the liquid gate.
+ *
+ * Driving head dH = max(Hs, zs) - ref, with zs = base_s + outlet and
+ *   ref = max(Hd, zd), zd = base_d + inlet   (destination a tank)
+ *       = Hd                                 (a fixed-head boundary)
+ *       = zs                                 (free discharge, Torricelli)
+ * so a destination surface below its inlet does not push back
+ * (non-interacting) and one above it does (interacting, flow may reverse).
+ * Gate: forward flow needs liquid at the source's outlet, reverse flow
+ * liquid at the destination's inlet; a smooth step over the band keeps a
+ * tank from delivering liquid it does not hold. */
+#include <math.h>
+#include "smooth.h"
+#include "vn_internal.h"
+
+double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
+                   double outlet, double inlet, int pc_outlet, int pc_inlet,
+                   vn_lf *ddh)
+{
+  (void) u;
+  double es, zs = 0;
+  if (s->istank)
+    {
+      zs = s->base + outlet;
+      int above = s->H >= zs;
+      es = above ? s->H : zs;
+      vn_lf_axpy (ddh, above ? 1.0 : 0.0, &s->dH);
+      vn_lf_p (ddh, pc_outlet, above ? 0.0 : 1.0);
+    }
+  else
+    {
+      es = s->H;
+      zs = outlet;
+      vn_lf_axpy (ddh, 1.0, &s->dH);
+    }
+  double ed;
+  if (!d)
+    {
+      ed = zs;
+      if (s->istank)
+        {
+          /* dH = max(Hs, zs) - zs: the level above the outlet */
+          vn_lf_p (ddh, pc_outlet, -1.0);
+          vn_lf_p (ddh, s->pc_base, -1.0);
+        }
+      else
+        vn_lf_p (ddh, pc_outlet, -1.0);
+    }
+  else if (d->istank)
+    {
+      double zd = d->base + inlet;
+      int above = d->H >= zd;
+      ed = above ? d->H : zd;
+      vn_lf_axpy (ddh, above ? -1.0 : 0.0, &d->dH);
+      vn_lf_p (ddh, pc_inlet, above ? 0.0 : -1.0);
+      vn_lf_p (ddh, d->pc_base, above ? 0.0 : -1.0);
+    }
+  else
+    {
+      ed = d->H;
+      vn_lf_axpy (ddh, -1.0, &d->dH);
+    }
+  return es - ed;
+}
+
+/* Gate on the liquid available upstream of the flow's direction. */
+double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
+                     double dh, double outlet, double inlet, int pc_outlet,
+                     int pc_inlet, double band, vn_lf *dg)
+{
+  (void) net;
+  int fwd = dh >= 0;
+  double gs = 1, gd = 1, dgs = 0, dgd = 0;
+  if (s && s->istank)
+    gs = vn_gate (s->level - outlet, band, &dgs);
+  if (d && d->istank)
+    gd = vn_gate (d->level - inlet, band, &dgd);
+  double cs = fwd ? dgs : 0, cd = fwd ? 0 : dgd;
+  if (s && s->istank)
+    {
+      vn_lf_axpy (dg, cs, &s->dH);
+      vn_lf_p (dg, s->pc_base, -cs);
+      vn_lf_p (dg, pc_outlet, -cs);
+    }
+  if (d && d->istank)
+    {
+      vn_lf_axpy (dg, cd, &d->dH);
+      vn_lf_p (dg, d->pc_base, -cd);
+      vn_lf_p (dg, pc_inlet, -cd);
+    }
+  return fwd ? gs : gd;
+}
+
+/* A link joins a node (tank or boundary) to a node or to free discharge,
+ * never a unit to itself, never two boundaries. */
+int vn_link_check_ends (vn_net *net, vn_unit *u)
+{
+  int self = (int) (u - net->u);
+  int s = u->ref[0], d = u->ref[1];
+  if (s < 0)
+    return vn_fail_unit (net, u, "source is missing; name a tank or a "
+                         "boundary");
+  if (net->u[s].k->role != VN_ROLE_NODE)
+    return vn_fail_unit (net, u, "source \"%s\" is a %s; it must be a tank "
+                         "or a boundary", net->u[s].name, net->u[s].k->name);
+  if (s == self || d == self)
+    return vn_fail_unit (net, u, "it is joined to itself");
+  if (d >= 0 && net->u[d].k->role != VN_ROLE_NODE)
+    return vn_fail_unit (net, u, "destination \"%s\" is a %s; it must be a "
+                         "tank, a boundary or \"\" for free discharge",
+                         net->u[d].name, net->u[d].k->name);
+  if (d == s)
+    return vn_fail_unit (net, u, "source and destination are the same unit "
+                         "\"%s\"", net->u[s].name);
+  int stank = net->u[s].k == &vn_kind_tank;
+  int dtank = d >= 0 && net->u[d].k == &vn_kind_tank;
+  if (!stank && !dtank)
+    return vn_fail_unit (net, u, "joins no tank (source \"%s\"%s%s); at "
+                         "least one end must be a tank", net->u[s].name,
+                         d >= 0 ? ", destination " : "",
+                         d >= 0 ? net->u[d].name : "");
+  return VN_OK;
+}

@@ -1,0 +1,326 @@
+#define _POSIX_C_SOURCE 199309L
+/* Integration with CVODES (BDF, Newton, analytic Jacobian): dense for
+ * small networks, KLU sparse for large ones.  The run is cut into
+ * segments at the signals' breakpoints and the integrator restarts at
+ * each, so a step in an input is met exactly. */
+#include <math.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+#include <time.h>
+#include <cvodes/cvodes.h>
+#include <nvector/nvector_serial.h>
+#include <sunlinsol/sunlinsol_dense.h>
+#include <sunlinsol/sunlinsol_klu.h>
+#include <sunmatrix/sunmatrix_dense.h>
+#include <sunmatrix/sunmatrix_sparse.h>
+#include "vn_internal.h"
+
+#define VN_DENSE_MAX 100  /* states: above this KLU wins (bench/) */
+
+int vn_breakpoints (const vn_net *net, double t0, double t1, double **out,
+                    int *n);
+
+typedef struct sim {
+  vn_net *net;
+  int interrupted;
+  int rhs_fail;
+} sim;
+
+static int cv_rhs (sunrealtype t, N_Vector y, N_Vector ydot, void *ud)
+{
+  sim *S = ud;
+  if (S->net->stop && S->net->stop (S->net->stop_data))
+    {
+      S->interrupted = 1;
+      return -1;
+    }
+  int st = vn_rhs (S->net, t, N_VGetArrayPointer (y),
+                   N_VGetArrayPointer (ydot));
+  if (st)
+    {
+      S->rhs_fail = st;
+      return 1;   /* recoverable: the step is retried smaller */
+    }
+  return 0;
+}
+
+static int cv_jac_dense (sunrealtype t, N_Vector y, N_Vector fy,
+                         SUNMatrix J, void *ud, N_Vector t1, N_Vector t2,
+                         N_Vector t3)
+{
+  (void) fy; (void) t1; (void) t2; (void) t3;
+  sim *S = ud;
+  return vn_jac_dense (S->net, t, N_VGetArrayPointer (y),
+                       SUNDenseMatrix_Data (J)) ? 1 : 0;
+}
+
+static int cv_jac_klu (sunrealtype t, N_Vector y, N_Vector fy, SUNMatrix J,
+                       void *ud, N_Vector t1, N_Vector t2, N_Vector t3)
+{
+  (void) fy; (void) t1; (void) t2; (void) t3;
+  sim *S = ud;
+  vn_net *net = S->net;
+  long nnz = SUNSparseMatrix_NNZ (J);
+  sunindextype *cp = SUNSparseMatrix_IndexPointers (J);
+  sunindextype *ri = SUNSparseMatrix_IndexValues (J);
+  double *v = SUNSparseMatrix_Data (J);
+  /* sunindextype is int64_t here; long is 64 bits on this platform */
+  return vn_jac_csc (net, t, N_VGetArrayPointer (y), &nnz, (long *) cp,
+                     (long *) ri, v) ? 1 : 0;
+}
+
+static double now (void)
+{
+  struct timespec ts;
+  clock_gettime (CLOCK_MONOTONIC, &ts);
+  return ts.tv_sec + 1e-9 * ts.tv_nsec;
+}
+
+/* the state whose weighted local error is largest: where trouble is */
+static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
+                      double t)
+{
+  N_Vector ele = N_VClone (y), w = N_VClone (y);
+  int worst = -1;
+  if (ele && w && CVodeGetEstLocalErrors (mem, ele) == CV_SUCCESS
+      && CVodeGetErrWeights (mem, w) == CV_SUCCESS)
+    {
+      double *e = N_VGetArrayPointer (ele), *wt = N_VGetArrayPointer (w);
+      double big = -1;
+      for (int i = 0; i < net->nx; i++)
+        if (fabs (e[i] * wt[i]) > big)
+          {
+            big = fabs (e[i] * wt[i]);
+            worst = i;
+          }
+    }
+  char where[256] = "";
+  if (worst >= 0)
+    {
+      int u = vn_state_unit (net, worst);
+      snprintf (where, sizeof where, "; the largest error is in %s.%s (%s "
+                "\"%s\"), value %g", net->u[u].name,
+                vn_state_var (net, worst), net->u[u].k->name,
+                net->u[u].name, N_VGetArrayPointer (y)[worst]);
+    }
+  vn_fail (net, VN_ESOLVER, "the integrator stopped at t = %.6g s (%s)%s%s",
+           t, CVodeGetReturnFlagName (flag), where,
+           flag == CV_TOO_MUCH_WORK ? "; the network may be very stiff or "
+           "chattering: check valve and pump data, or raise maxsteps" : "");
+  if (ele)
+    N_VDestroy (ele);
+  if (w)
+    N_VDestroy (w);
+}
+
+static void store (vn_net *net, int k, int nt, double t, const double *x,
+                   double *X, double *Y)
+{
+  for (int i = 0; i < net->nx; i++)
+    X[k + (long) nt * i] = x[i];
+  if (Y)
+    {
+      vn_outputs (net, t, x, net->y);
+      for (int i = 0; i < net->ny; i++)
+        Y[k + (long) nt * i] = net->y[i];
+    }
+}
+
+int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
+                 double *X, double *Y, const vn_sim_opts *o,
+                 vn_sim_stats *stats)
+{
+  vn_sim_opts opt = {0};
+  if (o)
+    opt = *o;
+  double rtol = opt.rtol > 0 ? opt.rtol : 1e-6;
+  double atol = opt.atol > 0 ? opt.atol : 1e-8;
+  long maxsteps = opt.maxsteps > 0 ? opt.maxsteps : 100000;
+  int solver = opt.solver ? opt.solver
+               : (net->nx <= VN_DENSE_MAX ? VN_SOLVER_DENSE : VN_SOLVER_KLU);
+  memset (stats, 0, sizeof *stats);
+  stats->solver = solver;
+  if (nt < 1)
+    return vn_fail (net, VN_EARG, "simulate: no output times given");
+  for (int k = 0; k < nt; k++)
+    if (!isfinite (tout[k]) || (k > 0 && tout[k] <= tout[k - 1]))
+      return vn_fail (net, VN_EARG, "simulate: output times must be finite "
+                      "and increasing; time %d is %g after %g", k + 1,
+                      tout[k], k > 0 ? tout[k - 1] : NAN);
+  for (int i = 0; i < net->nx; i++)
+    if (!isfinite (x0[i]))
+      return vn_fail (net, VN_EARG, "simulate: initial state %s.%s is not "
+                      "finite (%g)", net->u[vn_state_unit (net, i)].name,
+                      vn_state_var (net, i), x0[i]);
+  net->stop = opt.stop;
+  net->stop_data = opt.stop_data;
+
+  double *bp = NULL;
+  int nbp = 0;
+  int st = vn_breakpoints (net, tout[0], tout[nt - 1], &bp, &nbp);
+  if (st)
+    return st;
+
+  sim S = {net, 0, 0};
+  SUNContext ctx = NULL;
+  N_Vector y = NULL, cons = NULL;
+  SUNMatrix J = NULL;
+  SUNLinearSolver LS = NULL;
+  void *mem = NULL;
+  st = VN_OK;
+  int flag;
+
+  net->seg_end = nbp > 0 ? bp[0] : tout[nt - 1];
+  if (SUNContext_Create (NULL, &ctx) != 0
+      || !(y = N_VNew_Serial (net->nx, ctx))
+      || !(cons = N_VNew_Serial (net->nx, ctx)))
+    {
+      st = vn_fail (net, VN_ENOMEM, "simulate: cannot allocate the solver");
+      goto done;
+    }
+  memcpy (N_VGetArrayPointer (y), x0, (size_t) net->nx * sizeof (double));
+  /* volumes are kept non-negative */
+  {
+    double *c = N_VGetArrayPointer (cons);
+    for (int i = 0; i < net->nx; i++)
+      c[i] = strcmp (vn_state_var (net, i), "volume") == 0 ? 1.0 : 0.0;
+  }
+  store (net, 0, nt, tout[0], x0, X, Y);
+  mem = CVodeCreate (CV_BDF, ctx);
+  if (!mem)
+    {
+      st = vn_fail (net, VN_ENOMEM, "simulate: cannot create CVODES");
+      goto done;
+    }
+  if ((flag = CVodeInit (mem, cv_rhs, tout[0], y)) != CV_SUCCESS
+      || (flag = CVodeSStolerances (mem, rtol, atol)) != CV_SUCCESS
+      || (flag = CVodeSetUserData (mem, &S)) != CV_SUCCESS
+      || (flag = CVodeSetMaxNumSteps (mem, maxsteps)) != CV_SUCCESS
+      || (flag = CVodeSetConstraints (mem, cons)) != CV_SUCCESS
+      || (opt.hmax > 0 && (flag = CVodeSetMaxStep (mem, opt.hmax)) != CV_SUCCESS))
+    {
+      st = vn_fail (net, VN_ESOLVER, "simulate: setting up CVODES failed "
+                    "(%s)", CVodeGetReturnFlagName (flag));
+      goto done;
+    }
+  if (solver == VN_SOLVER_DENSE)
+    {
+      J = SUNDenseMatrix (net->nx, net->nx, ctx);
+      LS = J ? SUNLinSol_Dense (y, J, ctx) : NULL;
+    }
+  else
+    {
+      long nnz = 0;
+      if ((st = vn_jac_csc (net, tout[0], x0, &nnz, NULL, NULL, NULL)))
+        goto done;
+      J = SUNSparseMatrix (net->nx, net->nx, nnz, CSC_MAT, ctx);
+      LS = J ? SUNLinSol_KLU (y, J, ctx) : NULL;
+    }
+  if (!J || !LS)
+    {
+      st = vn_fail (net, VN_ENOMEM, "simulate: cannot allocate the linear "
+                    "solver");
+      goto done;
+    }
+  if ((flag = CVodeSetLinearSolver (mem, LS, J)) != CV_SUCCESS
+      || (flag = CVodeSetJacFn (mem, solver == VN_SOLVER_DENSE ? cv_jac_dense
+                                                           : cv_jac_klu))
+         != CV_SUCCESS)
+    {
+      st = vn_fail (net, VN_ESOLVER, "simulate: setting the linear solver "
+                    "failed (%s)", CVodeGetReturnFlagName (flag));
+      goto done;
+    }
+
+  double t0w = now ();
+  double t = tout[0];
+  int k = 1, b = 0;
+  while (k < nt)
+    {
+      double seg = b < nbp ? bp[b] : tout[nt - 1];
+      net->seg_end = seg;
+      CVodeSetStopTime (mem, seg);
+      while (k < nt && tout[k] <= seg)
+        {
+          double tr;
+          flag = CVode (mem, tout[k], y, &tr, CV_NORMAL);
+          if (flag < 0)
+            {
+              if (S.interrupted)
+                st = vn_fail (net, VN_EINTR, "simulate: interrupted at t = "
+                              "%.6g s", tr);
+              else
+                diagnose (net, mem, y, flag, tr), st = VN_ESOLVER;
+              stats->t_reached = tr;
+              goto stats;
+            }
+          t = tr;
+          /* outputs at a breakpoint take the input after it */
+          if (tout[k] >= seg && b < nbp)
+            net->seg_end = INFINITY;
+          store (net, k, nt, tout[k], N_VGetArrayPointer (y), X, Y);
+          net->seg_end = seg;
+          k++;
+        }
+      if (b < nbp)
+        {
+          if (t < seg)
+            {
+              double tr;
+              flag = CVode (mem, seg, y, &tr, CV_NORMAL);
+              if (flag < 0)
+                {
+                  if (S.interrupted)
+                    st = vn_fail (net, VN_EINTR, "simulate: interrupted at "
+                                  "t = %.6g s", tr);
+                  else
+                    diagnose (net, mem, y, flag, tr), st = VN_ESOLVER;
+                  stats->t_reached = tr;
+                  goto stats;
+                }
+              t = tr;
+            }
+          /* restart past the breakpoint: the inputs may jump here */
+          b++;
+          net->seg_end = b < nbp ? bp[b] : tout[nt - 1];
+          if ((flag = CVodeReInit (mem, seg, y)) != CV_SUCCESS)
+            {
+              st = vn_fail (net, VN_ESOLVER, "simulate: restart at t = %g "
+                            "failed (%s)", seg, CVodeGetReturnFlagName (flag));
+              goto stats;
+            }
+          stats->restarts++;
+        }
+    }
+  stats->t_reached = t;
+stats:
+  stats->wall = now () - t0w;
+  {
+    long v;
+    if (CVodeGetNumSteps (mem, &v) == CV_SUCCESS) stats->steps = v;
+    if (CVodeGetNumRhsEvals (mem, &v) == CV_SUCCESS) stats->rhs = v;
+    if (CVodeGetNumJacEvals (mem, &v) == CV_SUCCESS) stats->jac = v;
+    if (CVodeGetNumLinSolvSetups (mem, &v) == CV_SUCCESS) stats->setups = v;
+    if (CVodeGetNumErrTestFails (mem, &v) == CV_SUCCESS) stats->errfails = v;
+    if (CVodeGetNumNonlinSolvConvFails (mem, &v) == CV_SUCCESS)
+      stats->convfails = v;
+  }
+done:
+  net->seg_end = INFINITY;
+  net->stop = NULL;
+  if (mem)
+    CVodeFree (&mem);
+  if (LS)
+    SUNLinSolFree (LS);
+  if (J)
+    SUNMatDestroy (J);
+  if (y)
+    N_VDestroy (y);
+  if (cons)
+    N_VDestroy (cons);
+  if (ctx)
+    SUNContext_Free (&ctx);
+  free (bp);
+  return st;
+}

@@ -1,0 +1,176 @@
+/* vesselnet core: internal structures shared by the unit kinds and the
+ * evaluation framework.  Not installed; not part of the public API. */
+#ifndef VN_INTERNAL_H
+#define VN_INTERNAL_H
+
+#include "vn.h"
+
+#define VN_PI 3.14159265358979323846
+
+#define VN_NPMAX 16       /* parameter slots per unit */
+#define VN_LF 24          /* entries of one derivative linear form */
+#define VN_NAMELEN 64
+
+/* The derivative of one scalar with respect to states (x) and parameters
+ * (p), kept as a short list.  Entries are structural: a branch that makes
+ * a derivative zero still adds the entry (with 0), so the Jacobian
+ * pattern depends only on the topology. */
+typedef struct vn_lf {
+  int n;
+  int col[VN_LF];
+  unsigned char isp[VN_LF];  /* 1: column is a parameter index */
+  double v[VN_LF];
+} vn_lf;
+
+void vn_lf_zero (vn_lf *d);
+void vn_lf_x (vn_lf *d, int col, double v);
+void vn_lf_p (vn_lf *d, int col, double v);
+void vn_lf_axpy (vn_lf *d, double a, const vn_lf *s);   /* d += a s */
+void vn_lf_scale (vn_lf *d, double a);
+
+/* Triplet buffer for Jacobian emission. */
+typedef struct vn_trip {
+  long n, cap;
+  int *r, *c;
+  double *v;
+} vn_trip;
+
+/* What a node (tank or boundary) offers to the elements joined to it. */
+typedef struct vn_node {
+  int istank;
+  double H;       /* head: base + level (m) */
+  double level;   /* level above base (tank) */
+  double base;    /* base elevation */
+  double V;       /* volume (tank) */
+  double area;    /* dV/dlevel, floored (tank) */
+  int pc_base;    /* parameter column of the base elevation, -1 if none */
+  vn_lf dH;       /* derivative of the head */
+} vn_node;
+
+typedef struct vn_unit vn_unit;
+typedef struct vn_kind vn_kind;
+
+enum { VN_ROLE_NODE = 1, VN_ROLE_LINK = 2, VN_ROLE_OTHER = 3 };
+
+struct vn_unit {
+  int kind;
+  const vn_kind *k;
+  char name[VN_NAMELEN];
+  int ref[4];
+  int poff;               /* first parameter in net->p */
+  int xoff, nx;           /* owned states */
+  int yoff;               /* first output */
+  const double *tab;      /* table pairs (owned by net) */
+  int ntab;
+  double d[8];            /* derived constants set by the kind's check */
+  /* evaluation scratch */
+  double q;               /* flow of a link, spill of a tank */
+  vn_lf dq;
+};
+
+struct vn_kind {
+  const char *name;
+  int role;
+  int npar;
+  const vn_param_info *par;
+  int nout;
+  const char *const *out;
+  const char *const *ounit;
+  /* kind rules beyond the generic range checks; sets derived constants */
+  int (*check) (vn_net *net, vn_unit *u);
+  int (*nstates) (const vn_net *net, const vn_unit *u);
+  const char *(*state_var) (const vn_unit *u, int i);
+  int (*init) (vn_net *net, vn_unit *u, double *x);
+  /* node role: head and level from the states */
+  void (*node) (vn_net *net, vn_unit *u, const double *x, vn_node *nd);
+  /* link role: flow from src node to dst node (either may be NULL) */
+  double (*flow) (vn_net *net, vn_unit *u, const vn_node *s,
+                  const vn_node *d, const double *x, vn_lf *dq);
+  /* own state derivatives (actuator lags, ...); rows u->xoff.. */
+  void (*own) (vn_net *net, vn_unit *u, const double *x, double *f,
+               vn_lf *df);
+  /* outputs, after nodes and flows are known */
+  void (*outputs) (vn_net *net, vn_unit *u, const vn_node *nd,
+                   const double *x, double *y, vn_lf *dy);
+};
+
+typedef struct vn_signal {
+  int pidx, off, len, hold;
+} vn_signal;
+
+struct vn_net {
+  int nu;
+  vn_unit *u;
+  int nx, ny, np;
+  double *p;        /* parameters at the current time (inputs applied) */
+  double *p0;       /* nominal parameters */
+  unsigned char *given;
+  unsigned char *isinput;
+  double *tab;
+  double g, rho, cp, ambient, smooth;
+  int thermal, nspecies;
+  double *decay;
+  /* signals */
+  int nsig;
+  vn_signal *sig;
+  double *sigdata;
+  double seg_end;   /* signals take their left limit at t >= seg_end */
+  /* evaluation workspace */
+  vn_node *nd;      /* per unit (nodes only) */
+  vn_lf *dy;        /* per output */
+  double *y;        /* per output */
+  vn_trip jx, jp, yx, yp;
+  /* sparse pattern of df/dx */
+  long nnz;
+  long *colptr, *rowind, *map;
+  long nmap;
+  /* caller's stop flag */
+  int (*stop) (void *);
+  void *stop_data;
+  char msg[1024];
+};
+
+/* kinds */
+extern const vn_kind vn_kind_tank, vn_kind_boundary, vn_kind_feed,
+  vn_kind_orifice, vn_kind_resistance, vn_kind_valve, vn_kind_pump;
+
+/* messages */
+int vn_fail (vn_net *net, int status, const char *fmt, ...)
+#if defined(__GNUC__)
+  __attribute__ ((format (printf, 3, 4)))
+#endif
+  ;
+int vn_fail_unit (vn_net *net, const vn_unit *u, const char *fmt, ...)
+#if defined(__GNUC__)
+  __attribute__ ((format (printf, 3, 4)))
+#endif
+  ;
+
+/* parameter access for kinds */
+static inline double vn_par (const vn_net *net, const vn_unit *u, int slot)
+{ return net->p[u->poff + slot]; }
+static inline int vn_pcol (const vn_unit *u, int slot)
+{ return u->poff + slot; }
+static inline int vn_given (const vn_net *net, const vn_unit *u, int slot)
+{ return net->given[u->poff + slot]; }
+
+/* evaluation framework */
+int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
+             int want_jx, int want_jp, int want_yx, int want_yp);
+void vn_apply_signals (vn_net *net, double t);
+int vn_trip_add (vn_trip *T, int r, int c, double v);
+void vn_trip_free (vn_trip *T);
+void vn_emit (vn_net *net, int row, double sign, const vn_lf *d,
+              vn_trip *tx, vn_trip *tp);
+
+/* the two-ended element geometry shared by orifices, resistances,
+ * valves: head difference by the nozzle rule and the liquid gate */
+double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
+                   double outlet, double inlet, int pc_outlet, int pc_inlet,
+                   vn_lf *ddh);
+double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
+                     double dh, double outlet, double inlet, int pc_outlet,
+                     int pc_inlet, double band, vn_lf *dg);
+int vn_link_check_ends (vn_net *net, vn_unit *u);
+
+#endif

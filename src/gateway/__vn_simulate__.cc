@@ -1,0 +1,66 @@
+// [t, X, Y, stats, states] = __vn_simulate__ (pk, sig, tout, x0, opts)
+// Integrate a packed network; x0 empty = from the declared levels.
+#include "vn_gateway.h"
+
+static const char *FN = "vn_simulate";
+
+DEFUN_DLD (__vn_simulate__, args, ,
+           "-*- texinfo -*-\n@deftypefn {} {[@var{X}, @var{Y}, @var{stats}, "
+           "@var{states}] =} __vn_simulate__ (@var{pk}, @var{sig}, "
+           "@var{tout}, @var{x0}, @var{opts})\nInternal: integrate a packed "
+           "network.\n@end deftypefn")
+{
+  if (args.length () != 5)
+    print_usage ();
+  ColumnVector tout = args(2).xcolumn_vector_value ("%s: TOUT must be a "
+                                                    "vector", FN);
+  octave_scalar_map o = args(4).xscalar_map_value ("%s: OPTS must be a "
+                                                   "struct", FN);
+  vn_gw_spec G;
+  vn_gw_net H;
+  vn_gw_build (args(0), G, H, FN);
+  vn_net *net = H.net;
+  vn_gw_check (net, vn_gw_signals (net, args(1), FN), FN);
+  int nx = vn_nstates (net), ny = vn_noutputs (net);
+  ColumnVector x0 (nx);
+  if (args(3).isempty ())
+    vn_gw_check (net, vn_initial_state (net, x0.fortran_vec ()), FN);
+  else
+    {
+      x0 = args(3).xcolumn_vector_value ("%s: initial state must be a "
+                                         "vector", FN);
+      if (x0.numel () != nx)
+        error_with_id ("Octave:invalid-input-arg", "%s: initial state has "
+                       "%d values; this network has %d states", FN,
+                       (int) x0.numel (), nx);
+    }
+  vn_sim_opts so = {};
+  so.rtol = o.contents ("reltol").double_value ();
+  so.atol = o.contents ("abstol").double_value ();
+  so.solver = o.contents ("solver").int_value ();
+  so.maxsteps = o.contents ("maxsteps").long_value ();
+  so.hmax = o.contents ("maxstep").double_value ();
+  so.stop = vn_gw_stop;
+  int nt = tout.numel ();
+  Matrix X (nt, nx), Y (nt, ny);
+  vn_sim_stats stats;
+  int st = vn_simulate (net, x0.data (), nt, tout.data (), X.fortran_vec (),
+                        Y.fortran_vec (), &so, &stats);
+  octave_scalar_map sm;
+  sm.assign ("steps", (double) stats.steps);
+  sm.assign ("rhs", (double) stats.rhs);
+  sm.assign ("jac", (double) stats.jac);
+  sm.assign ("setups", (double) stats.setups);
+  sm.assign ("errfails", (double) stats.errfails);
+  sm.assign ("convfails", (double) stats.convfails);
+  sm.assign ("restarts", (double) stats.restarts);
+  sm.assign ("wall", stats.wall);
+  sm.assign ("solver", stats.solver == VN_SOLVER_KLU ? "klu" : "dense");
+  sm.assign ("t_reached", stats.t_reached);
+  vn_gw_check (net, st, FN);
+  Cell names (nx, 1);
+  for (int i = 0; i < nx; i++)
+    names(i) = std::string (vn_unit_name (net, vn_state_unit (net, i)))
+               + "." + vn_state_var (net, i);
+  return ovl (X, Y, sm, names);
+}
