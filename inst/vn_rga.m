@@ -111,7 +111,7 @@ function [G, inputs, outputs] = gain_of (lin)
       G = zeros (size (lin.D));
       for i = 1:rows (G)
         for j = 1:columns (G)
-          [~, ~, ~, G(i,j)] = lin_tf (lin.A, lin.B(:,j), lin.C(i,:), lin.D(i,j));
+          [~, ~, ~, G(i,j)] = lin_polynomials (lin.A, lin.B(:,j), lin.C(i,:), lin.D(i,j));
         endfor
       endfor
     else

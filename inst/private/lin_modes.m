@@ -21,7 +21,7 @@
 ##
 ## Imaginary parts below @code{1e-10 * abs (pole)} are round-off of the
 ## eigenvalue solver and are set to zero, so such poles count as real.
-## @seealso{lin_tf, vn_frequency}
+## @seealso{lin_polynomials, vn_frequency}
 ## @end deftypefn
 
 function [poles, tau, zeta, wn] = lin_modes (A)

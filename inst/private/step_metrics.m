@@ -50,7 +50,7 @@
 ##
 ## With no final change every figure but @code{gain} and @code{final} is NaN
 ## (@code{inverse} false).
-## @seealso{lin_step}
+## @seealso{lin_deviation}
 ## @end deftypefn
 
 function m = step_metrics (t, y, varargin)

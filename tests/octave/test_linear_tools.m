@@ -16,7 +16,7 @@
 %! ## First order K/(tau s + 1): y = K du (1 - exp (-t/tau)) (analytic).
 %! K = 1.6;  tau = 240;  du = 0.004;
 %! t = (0:5:1800)';
-%! y = lin_step (-1/tau, K/tau, 1, 0, du, t);
+%! y = lin_deviation (-1/tau, K/tau, 1, 0, du, t);
 %! assert (y, K * du * (1 - exp (-t / tau)), 1e-15);
 
 %!test
@@ -31,7 +31,7 @@
 %! lsode_options ("relative tolerance", 1e-12);
 %! lsode_options ("absolute tolerance", 1e-13);
 %! x = lsode (@(x, tt) A * x + B * du, zeros (3, 1), t);
-%! y = lin_step (A, B, C, D, du, t);
+%! y = lin_deviation (A, B, C, D, du, t);
 %! assert (y, x * C.' + (D * du).', 1e-9);
 
 %!test
@@ -44,7 +44,7 @@
 %! t = (0:50:4000)';
 %! opt = odeset ("RelTol", 1e-10, "AbsTol", 1e-12);
 %! [~, x] = ode45 (@(tt, x) A * x + B, t, zeros (n, 1), opt);
-%! y = lin_step (A, B, C, 0, 1, t);
+%! y = lin_deviation (A, B, C, 0, 1, t);
 %! assert (y, x(:,n), 1e-8);
 %! ## Erlang: 40 equal lags give P(T >= 40 | rate t/60) at the last tank (analytic).
 %! k = 0:n-1;
@@ -54,13 +54,13 @@
 %!test
 %! ## Integrating process (A = 0): the step is a ramp of slope B du (analytic).
 %! t = (0:10:600)';
-%! assert (lin_step (0, 1/2.5, 1, 0, 0.01, t), 0.004 * t, 1e-12);
+%! assert (lin_deviation (0, 1/2.5, 1, 0, 0.01, t), 0.004 * t, 1e-12);
 
 %!test
 %! ## Lag into an integrator: x1' = -x1 + u, x2' = x1, y = x2:
 %! ## y = t - 1 + exp (-t) (analytic).
 %! t = linspace (0, 20, 201)';
-%! y = lin_step ([-1 0; 1 0], [1; 0], [0 1], 0, 1, t);
+%! y = lin_deviation ([-1 0; 1 0], [1; 0], [0 1], 0, 1, t);
 %! assert (y, t - 1 + exp (-t), 1e-12);
 
 ## ---- step figures ----------------------------------------------------
@@ -73,7 +73,7 @@
 %! zeta = 0.5;  wn = 10;
 %! A = [0 1; -wn^2, -2*zeta*wn];
 %! t = (0:1e-4:3)';
-%! y = lin_step (A, [0; wn^2], [1 0], 0, 1, t);
+%! y = lin_deviation (A, [0; wn^2], [1 0], 0, 1, t);
 %! m = step_metrics (t, y, 1, "final", 1);
 %! assert (m.overshoot, 100 * exp (-pi * zeta / sqrt (1 - zeta^2)), 1e-6);
 %! assert (m.overshoot, 16.303, 5e-4);
@@ -87,7 +87,7 @@
 %! ## First order: 63.212 % at tau, 95.021 % at 3 tau (analytic, REFERENCES.md).
 %! tau = 300;
 %! t = (0:1:3000)';
-%! y = lin_step (-1/tau, 2/tau, 1, 0, 0.5, t);
+%! y = lin_deviation (-1/tau, 2/tau, 1, 0, 0.5, t);
 %! assert (y(t == tau), 0.63212, 5e-6);
 %! assert (y(t == 3*tau), 0.95021, 5e-6);
 %! m = step_metrics (t, y, 0.5, "final", 1);
@@ -102,7 +102,7 @@
 %! B = [0; 1];
 %! C = [3 -2];
 %! t = (0:1e-3:20)';
-%! y = lin_step (A, B, C, 0, 1, t);
+%! y = lin_deviation (A, B, C, 0, 1, t);
 %! assert (y, 1 - exp (-t) - 3 * t .* exp (-t), 1e-12);
 %! m = step_metrics (t, y, 1, "final", 1);
 %! assert (m.inverse);
@@ -130,7 +130,7 @@
 %! A = [-1/(A1*R1), 1/(A1*R1); 1/(A2*R1), -(1/R1 + 1/R2)/A2];
 %! B = [1/A1; 0];
 %! C = [0 1];
-%! [num, den, z, g] = lin_tf (A, B, C, 0);
+%! [num, den, z, g] = lin_polynomials (A, B, C, 0);
 %! assert (den / den(end), [0.5 3.5 1], 1e-12);
 %! assert (num / den(end), 2, 1e-12);
 %! assert (isempty (z));
@@ -144,7 +144,7 @@
 %!test
 %! ## Zeros: (s + 2)/((s + 1)(s + 3)) from a modal model (analytic partial
 %! ## fractions 0.5/(s + 1) + 0.5/(s + 3)).
-%! [num, den, z, g] = lin_tf (diag ([-1 -3]), [1; 1], [0.5 0.5], 0);
+%! [num, den, z, g] = lin_polynomials (diag ([-1 -3]), [1; 1], [0.5 0.5], 0);
 %! assert (num, [1 2], 1e-12);
 %! assert (den, [1 4 3], 1e-12);
 %! assert (z, -2, 1e-12);
@@ -153,9 +153,9 @@
 %!test
 %! ## Integrator with an unobservable second integrator: finite part cancels,
 %! ## 1/s stays (analytic).
-%! [num, den, z, g] = lin_tf ([0 0; 0 0], [1; 1], [1 0], 0);
+%! [num, den, z, g] = lin_polynomials ([0 0; 0 0], [1; 1], [1 0], 0);
 %! assert (g, Inf);
-%! [~, ~, ~, g2] = lin_tf ([0 0; 0 -1], [0; 1], [0 1], 0);
+%! [~, ~, ~, g2] = lin_polynomials ([0 0; 0 -1], [0; 1], [0 1], 0);
 %! assert (g2, 1, 1e-12);
 
 ## ---- frequency response and margins -----------------------------------
@@ -260,7 +260,7 @@
 %!   sys = ss (A, B, C, 0.2);
 %!   t = (0:0.1:20)';
 %!   y = step (sys, t);
-%!   assert (lin_step (A, B, C, 0.2, 1, t), y(:), 1e-8);
+%!   assert (lin_deviation (A, B, C, 0.2, 1, t), y(:), 1e-8);
 %!   w = logspace (-2, 2, 40)';
 %!   [mag, pha] = bode (sys, w);
 %!   fr = vn_frequency (struct ("A", A, "B", B, "C", C, "D", 0.2), w);

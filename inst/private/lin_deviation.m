@@ -1,5 +1,5 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{Y} =} lin_step (@var{A}, @var{B}, @var{C}, @var{D}, @var{du}, @var{t})
+## @deftypefn {} {@var{Y} =} lin_deviation (@var{A}, @var{B}, @var{C}, @var{D}, @var{du}, @var{t})
 ## Return the exact step response of a linear model.
 ##
 ## The model @code{dx/dt = A x + B u, y = C x + D u} starts at its steady
@@ -19,7 +19,7 @@
 ## @seealso{step_metrics, lin_modes}
 ## @end deftypefn
 
-function Y = lin_step (A, B, C, D, du, t)
+function Y = lin_deviation (A, B, C, D, du, t)
 
   if (nargin != 6)
     print_usage ();
@@ -27,29 +27,29 @@ function Y = lin_step (A, B, C, D, du, t)
   n = rows (A);
   if (! isnumeric (A) || columns (A) != n)
     error ("Octave:invalid-input-arg",
-           "lin_step: A must be square, got size %s", mat2str (size (A)));
+           "lin_deviation: A must be square, got size %s", mat2str (size (A)));
   endif
   m = columns (B);
   if (! isnumeric (B) || rows (B) != n || ! isnumeric (C) || columns (C) != n
       || ! isnumeric (D) || ! isequal (size (D), [rows(C), m]))
     error ("Octave:invalid-input-arg",
-           "lin_step: sizes of A %s, B %s, C %s, D %s do not agree",
+           "lin_deviation: sizes of A %s, B %s, C %s, D %s do not agree",
            mat2str (size (A)), mat2str (size (B)), mat2str (size (C)),
            mat2str (size (D)));
   endif
   if (! isnumeric (du) || ! isvector (du) || numel (du) != m
       || ! all (isfinite (du)))
     error ("Octave:invalid-input-arg",
-           "lin_step: DU must hold %d finite step sizes (one per input), got %d",
+           "lin_deviation: DU must hold %d finite step sizes (one per input), got %d",
            m, numel (du));
   endif
   if (! isnumeric (t) || ! isvector (t) || ! isreal (t) || ! all (isfinite (t)))
     error ("Octave:invalid-input-arg",
-           "lin_step: T must be a vector of finite real times");
+           "lin_deviation: T must be a vector of finite real times");
   endif
   if (n > 3000)
     error ("vesselnet:too-large",
-           "lin_step: %d states exceed the 3000 for which the exact step is computed",
+           "lin_deviation: %d states exceed the 3000 for which the exact step is computed",
            n);
   endif
 
@@ -100,12 +100,12 @@ endfunction
 %!test
 %! ## First order 2/(5 s + 1), step 0.5: y = 1 - exp(-t/5) (analytic).
 %! t = (0:0.5:30)';
-%! y = lin_step (-0.2, 1, 0.4, 0, 0.5, t);
+%! y = lin_deviation (-0.2, 1, 0.4, 0, 0.5, t);
 %! assert (y, 1 - exp (-t / 5), 1e-13);
 
 %!test
 %! ## Integrator dx/dt = 3 u: a ramp 3 du t (analytic), nonuniform times.
 %! t = [-1; 0; 0.3; 2; 7];
-%! assert (lin_step (0, 3, 1, 0, 2, t), [0; 0; 1.8; 12; 42], 1e-12);
+%! assert (lin_deviation (0, 3, 1, 0, 2, t), [0; 0; 1.8; 12; 42], 1e-12);
 
-%!error <3 finite step sizes> lin_step (-1, [1 1 1], 1, [0 0 0], [1 2], 0:1)
+%!error <3 finite step sizes> lin_deviation (-1, [1 1 1], 1, [0 0 0], [1 2], 0:1)

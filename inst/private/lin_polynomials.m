@@ -1,5 +1,5 @@
 ## -*- texinfo -*-
-## @deftypefn {} {[@var{num}, @var{den}, @var{zeros}, @var{gain}] =} lin_tf (@var{A}, @var{B}, @var{C}, @var{D})
+## @deftypefn {} {[@var{num}, @var{den}, @var{zeros}, @var{gain}] =} lin_polynomials (@var{A}, @var{B}, @var{C}, @var{D})
 ## Return the transfer function of a one-input, one-output linear model.
 ##
 ## @var{A} is n x n, @var{B} n x 1, @var{C} 1 x n and @var{D} scalar.  The
@@ -20,7 +20,7 @@
 ## @seealso{lin_modes, vn_frequency}
 ## @end deftypefn
 
-function [num, den, zeros, gain] = lin_tf (A, B, C, D)
+function [num, den, zeros, gain] = lin_polynomials (A, B, C, D)
 
   if (nargin != 4)
     print_usage ();
@@ -30,8 +30,8 @@ function [num, den, zeros, gain] = lin_tf (A, B, C, D)
       || ! isequal (size (B), [n 1]) || ! isnumeric (C)
       || ! isequal (size (C), [1 n]) || ! isnumeric (D) || ! isscalar (D))
     error ("Octave:invalid-input-arg",
-           ["lin_tf: sizes of A %s, B %s, C %s, D %s do not form a one-input, ", ...
-            "one-output model (need n x n, n x 1, 1 x n, 1 x 1)"],
+           ["lin_polynomials: sizes of A %s, B %s, C %s, D %s do not form ", ...
+            "a one-input, one-output model (need n x n, n x 1, 1 x n, 1 x 1)"],
            mat2str (size (A)), mat2str (size (B)), mat2str (size (C)),
            mat2str (size (D)));
   endif
@@ -83,7 +83,7 @@ endfunction
 
 %!test
 %! ## First order K/(tau s + 1), K 2, tau 5 (analytic).
-%! [num, den, z, g] = lin_tf (-1/5, 1, 2/5, 0);
+%! [num, den, z, g] = lin_polynomials (-1/5, 1, 2/5, 0);
 %! assert (num, 0.4, 1e-14);
 %! assert (den, [1 0.2], 1e-14);
 %! assert (isempty (z));
@@ -91,10 +91,10 @@ endfunction
 
 %!test
 %! ## Integrator 3/s plus D 1: (s + 3)/s, Inf gain (analytic).
-%! [num, den, z, g] = lin_tf (0, 1, 3, 1);
+%! [num, den, z, g] = lin_polynomials (0, 1, 3, 1);
 %! assert (num, [1 3], 1e-14);
 %! assert (den, [1 0]);
 %! assert (z, -3, 1e-14);
 %! assert (g, Inf);
 
-%!error <one-input> lin_tf (eye (2), [1; 1], [1 1 1], 0)
+%!error <one-input> lin_polynomials (eye (2), [1; 1], [1 1 1], 0)
