@@ -136,6 +136,39 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
                  double *X, double *Y, const vn_sim_opts *opts,
                  vn_sim_stats *stats);
 
+/* ---- steady state (operating point) ---- */
+typedef struct vn_steady_opts {
+  int maxiter;             /* Newton iterations per attempt, default 60 */
+  double tol;              /* relative residual tolerance, default 1e-10 */
+  int solver;              /* VN_SOLVER_*: dense LU or KLU */
+  int simulate;            /* 0: no simulation fallback on failure */
+  /* inverse problem: adjust nadj inputs (parameter indices) so that
+   * outputs yout (output indices) reach target; nadj must equal ntgt */
+  int nadj;
+  const int *padj;
+  int ntgt;
+  const int *ytgt;
+  const double *target;
+  int (*stop) (void *);    /* polled; non-zero stops the search */
+  void *stop_data;
+} vn_steady_opts;
+
+typedef struct vn_steady_info {
+  int iterations;          /* Newton iterations, all attempts */
+  int simulated;           /* 1 if the answer came after a simulation */
+  double t_sim;            /* simulated time before the final Newton (s) */
+  double residual;         /* max |f| at the answer (m3/s, ...) */
+  double relres;           /* residual over the network's flow scale */
+  int solver;              /* VN_SOLVER_DENSE or VN_SOLVER_KLU */
+} vn_steady_info;
+
+/* Solve f(x, u) = 0 (and output = target) from the state x (in: start,
+ * out: answer); the adjusted inputs start from and end at the network's
+ * values (vn_param_get).  VN_ENOSTEADY when no steady state exists, with
+ * the reason in engineering terms in vn_errmsg (). */
+int vn_steady (vn_net *net, double *x, const vn_steady_opts *opts,
+               vn_steady_info *info);
+
 #ifdef __cplusplus
 }
 #endif
