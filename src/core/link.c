@@ -27,6 +27,7 @@ double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
       es = above ? s->H : zs;
       vn_lf_axpy (ddh, above ? 1.0 : 0.0, &s->dH);
       vn_lf_p (ddh, pc_outlet, above ? 0.0 : 1.0);
+      vn_lf_p (ddh, s->pc_base, above ? 0.0 : 1.0);
     }
   else
     {

@@ -61,6 +61,13 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
   /* suction gate: liquid at the outlet nozzle of the source */
   double g = vn_link_gate (net, s, NULL, 1.0, out_, in_, vn_pcol (u, OUTLET),
                            vn_pcol (u, INLET), band (net, u), pg);
+  if (vn_given (net, u, SUCTION) && s->istank)
+    {
+      /* a wider band lowers the gate: g(l/b), dg/db = -g'(l) l / b */
+      double dgs, sl = s->level - out_, bd = band (net, u);
+      vn_gate (sl, bd, &dgs);
+      vn_lf_p (pg, vn_pcol (u, SUCTION), -dgs * sl / bd);
+    }
   double dh = vn_link_dh (u, s, d, out_, in_, vn_pcol (u, OUTLET),
                           vn_pcol (u, INLET), pdh);
   if (fixed (net, u))
@@ -98,13 +105,32 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
 static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
                      const double *x, double *y, vn_lf *dy)
 {
-  (void) net;
   (void) nd;
   (void) x;
   y[0] = u->q;
   y[1] = u->d[0];
-  if (dy)
-    vn_lf_axpy (&dy[0], 1, &u->dq);
+  if (!dy)
+    return;
+  vn_lf_axpy (&dy[0], 1, &u->dq);
+  if (fixed (net, u))
+    {
+      /* head = the lift, -dh, from the nodes as the flow saw them */
+      const vn_node *s = &net->nd[u->ref[0]];
+      const vn_node *d = u->ref[1] >= 0 ? &net->nd[u->ref[1]] : NULL;
+      vn_lf ddh;
+      vn_lf_zero (&ddh);
+      vn_link_dh (u, s, d, net->p[u->poff + OUTLET], net->p[u->poff + INLET],
+                  vn_pcol (u, OUTLET), vn_pcol (u, INLET), &ddh);
+      vn_lf_axpy (&dy[1], -1, &ddh);
+      return;
+    }
+  /* head = s^2 H0 - k q^2 */
+  double sp = net->p[u->poff + SPEED], H0 = net->p[u->poff + SHUTOFF];
+  double k = net->p[u->poff + K], q = u->q;
+  vn_lf_p (&dy[1], vn_pcol (u, SPEED), 2 * sp * H0);
+  vn_lf_p (&dy[1], vn_pcol (u, SHUTOFF), sp * sp);
+  vn_lf_p (&dy[1], vn_pcol (u, K), -q * q);
+  vn_lf_axpy (&dy[1], -2 * k * q, &u->dq);
 }
 
 const vn_kind vn_kind_pump = {

@@ -352,18 +352,28 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
   if (isfinite (u->d[D_RIM]))
     {
       double n = net->p[u->poff + CONTR], L = u->d[D_CREST];
-      double q = 0, dqdH = 0;
+      double q = 0, dqdH = 0, dqdL = 0;
       if (H > 0)
         {
           double Le = fmax (L - 0.1 * n * H, 0), sh = sqrt (H);
           q = 1.84 * Le * H * sh;
           dqdH = 1.84 * (1.5 * Le * sh - (Le > 0 ? 0.1 * n * H * sh : 0));
+          dqdL = Le > 0 ? 1.84 * H * sh : 0;
         }
       u->q = q;
       vn_lf_axpy (&u->dq, dqdH, &nd->dH);
       vn_lf_p (&u->dq, vn_pcol (u, BASE), -dqdH);
       if (vn_given (net, u, RIM))
         vn_lf_p (&u->dq, vn_pcol (u, RIM), -dqdH);
+      else if (shape == PRISM && vn_given (net, u, HEIGHT))
+        vn_lf_p (&u->dq, vn_pcol (u, HEIGHT), -dqdH);
+      /* the crest, given or (prism) the perimeter of a round plan */
+      if (vn_given (net, u, CREST))
+        vn_lf_p (&u->dq, vn_pcol (u, CREST), dqdL);
+      else if (shape == PRISM && vn_given (net, u, AREA))
+        vn_lf_p (&u->dq, vn_pcol (u, AREA), dqdL * sqrt (VN_PI / u->d[D_A]));
+      else if (shape == PRISM)
+        vn_lf_p (&u->dq, vn_pcol (u, DIAM), dqdL * VN_PI);
     }
 }
 
