@@ -29,8 +29,9 @@ int vn_set_signals (vn_net *net, int nsig, const int *unit, const int *slot,
       int pidx = vn_param_index (net, unit[i], slot[i]);
       if (pidx < 0 || !net->isinput[pidx])
         return vn_fail (net, VN_EARG, "signal %d: %s \"%s\" has no input "
-                        "in slot %d; signals drive inputs only", i + 1,
-                        u->k->name, u->name, slot[i]);
+                        "in slot %d (%s); signals drive inputs only", i + 1,
+                        u->k->name, u->name, slot[i],
+                        pidx >= 0 ? u->k->par[slot[i]].name : "no such slot");
       if (len[i] < 1)
         return vn_fail (net, VN_EARG, "signal %d on %s.%s: it has no "
                         "points", i + 1, u->name, u->k->par[slot[i]].name);
