@@ -1,0 +1,301 @@
+## -*- texinfo -*-
+## @deftypefn  {} {@var{lin} =} vn_linearize (@var{net}, @var{op}, @var{inputs}, @var{outputs})
+## @deftypefnx {} {@var{lin} =} vn_linearize (@dots{}, @var{name}, @var{value}, @dots{})
+## Linearise a network about an operating point.
+##
+## @var{op} is an operating point from @code{vn_steady}: its state vector
+## @code{op.x} and, when present, its network @code{op.net} whose input
+## values (feed flows, valve openings, pump speeds, boundary heads) are
+## used in place of those of @var{net}.  A plain state vector, or [] for
+## the levels declared on the tanks, is accepted too.  @var{inputs} and
+## @var{outputs} are quantities @qcode{"UNIT.VARIABLE"}, a cell array or a
+## single string: inputs are input parameters (@qcode{"F1.flow"},
+## @qcode{"LV1.opening"}, @qcode{"P1.speed"}); outputs any reported
+## variable (@qcode{"T2.level"}, @qcode{"T2.volume"}, @qcode{"O1.flow"},
+## @qcode{"T1.spill"}, @qcode{"LV1.position"}).
+##
+## The model is @code{dx/dt = A x + B u, y = C x + D u} in deviations from
+## the operating point, SI units and seconds, with the analytic Jacobians
+## of the compiled core.  Fields of @var{lin}:
+##
+## @table @code
+## @item A, B, C, D
+## the matrices; A is sparse above 200 states, dense otherwise.
+## @item states, inputs, outputs
+## names of the states (@qcode{"T1.volume"}, ...), inputs and outputs.
+## @item poles, tau, zeta, wn
+## poles slowest first with their time constants @code{-1/real (pole)} (s;
+## Inf for an integrator), damping ratios and natural frequencies (rad/s).
+## Not computed above 2000 states unless asked (see @code{note}).
+## @item gain
+## steady-state gains, outputs x inputs, @code{D - C A^-1 B}; a signed Inf
+## where an input drives an integrating output (a tank whose outflow does
+## not depend on its level).
+## @item num, den, zeros
+## for one input and one output: the transfer function's coefficients in
+## descending powers of s and its zeros; [] otherwise.
+## @item op
+## the operating point given.
+## @item note
+## what was left out, or "".
+## @end table
+##
+## Options:
+## @table @asis
+## @item @qcode{"sparse"}
+## true: return A sparse whatever the size.
+## @item @qcode{"dense"}
+## true: return A dense whatever the size.
+## @item @qcode{"poles"}
+## true: compute the poles above 2000 states too (dense eigenvalues, slow);
+## false: skip them at any size.
+## @item @qcode{"loop"}
+## @qcode{"open"} (the only choice yet): controllers are left out of the model.
+## @end table
+##
+## A linear model holds near its operating point only: check it against a
+## simulation (@code{vn_stepresponse}) and against plant data before
+## tuning a live loop with it, and have the tuning reviewed.
+## @seealso{vn_steady, vn_stepresponse, vn_frequency, vn_rga}
+## @end deftypefn
+
+function lin = vn_linearize (net, op, inputs, outputs, varargin)
+
+  if (nargin < 4)
+    print_usage ();
+  endif
+  opt = parse_options (varargin);
+  if (! (isstruct (net) && isfield (net, "type")
+         && strcmp (net.type, "vesselnet.network")))
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: NET must be a network made by vn_network");
+  endif
+  inputs = name_list (inputs, "INPUTS");
+  outputs = name_list (outputs, "OUTPUTS");
+  [pnet, x, opstates] = lin_operating (net, op, "vn_linearize");
+
+  pin = zeros (1, numel (inputs), "int32");
+  for j = 1:numel (inputs)
+    q = vn_quantity (net, inputs{j}, "input", "vn_linearize");
+    pin(j) = q.index;
+  endfor
+  [~, first] = unique (inputs, "first");
+  if (numel (first) < numel (inputs))
+    dup = inputs(setdiff (1:numel (inputs), first));
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: input \"%s\" is given twice", dup{1});
+  endif
+  yout = zeros (1, numel (outputs), "int32");
+  for i = 1:numel (outputs)
+    yout(i) = output_index (net, outputs{i});
+  endfor
+
+  ## The core's sparse Jacobian serves both forms; B, C, D come dense.
+  [A, B, C, D, states, x] = __vn_linearize__ (vn_pack (pnet), x, pin, yout,
+                                              true);
+  if (! isempty (opstates) && ! isequal (opstates, states(:)))
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: the operating point is from another network: its states are %s; this network has %s",
+           strjoin (opstates.', ", "), strjoin (states(:).', ", "));
+  endif
+  nx = rows (A);
+  if (opt.dense || (! opt.sparse && nx <= 200))
+    A = full (A);
+  endif
+
+  lin.A = A;
+  lin.B = B;
+  lin.C = C;
+  lin.D = D;
+  lin.states = states(:);
+  lin.inputs = inputs(:);
+  lin.outputs = outputs(:);
+  lin.x = x;
+  lin.note = "";
+  lin.poles = [];
+  lin.tau = [];
+  lin.zeta = [];
+  lin.wn = [];
+  if (isempty (opt.poles))
+    opt.poles = nx <= 2000;
+    if (! opt.poles)
+      lin.note = sprintf (["poles not computed: %d states exceed 2000 ", ...
+                           "(ask with \"poles\", true)"], nx);
+    endif
+  endif
+  if (opt.poles)
+    [lin.poles, lin.tau, lin.zeta, lin.wn] = lin_modes (A);
+  endif
+  lin.gain = lin_gain (A, B, C, D);
+  lin.num = [];
+  lin.den = [];
+  lin.zeros = [];
+  if (numel (inputs) == 1 && numel (outputs) == 1 && opt.poles)
+    [lin.num, lin.den, lin.zeros] = lin_polynomials (full (A), B, C, D);
+  endif
+  lin.op = op;
+
+endfunction
+
+function opt = parse_options (args)
+  opt = struct ("sparse", false, "dense", false, "poles", []);
+  if (mod (numel (args), 2) != 0)
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: options come in name/value pairs");
+  endif
+  for i = 1:2:numel (args)
+    name = args{i};
+    val = args{i+1};
+    if (! ischar (name))
+      error ("Octave:invalid-input-arg",
+             "vn_linearize: option names must be strings");
+    endif
+    switch (lower (name))
+      case {"sparse", "dense", "poles"}
+        if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
+          error ("Octave:invalid-input-arg",
+                 "vn_linearize: option \"%s\" must be true or false",
+                 lower (name));
+        endif
+        opt.(lower (name)) = logical (val);
+      case "loop"
+        if (! (ischar (val) && strcmpi (val, "open")))
+          error ("Octave:invalid-input-arg",
+                 "vn_linearize: option \"loop\" must be \"open\" (closed-loop models with controllers are not available yet), got %s",
+                 shown (val));
+        endif
+      otherwise
+        error ("Octave:invalid-input-arg",
+               "vn_linearize: unknown option \"%s\"; allowed: sparse, dense, poles, loop",
+               name);
+    endswitch
+  endfor
+  if (opt.sparse && opt.dense)
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: options \"sparse\" and \"dense\" cannot both be true");
+  endif
+endfunction
+
+## A string or cell array of strings, as a row cell.
+function c = name_list (c, what)
+  if (ischar (c) && rows (c) <= 1)
+    c = {c};
+  endif
+  if (! iscell (c))
+    error ("Octave:invalid-input-arg",
+           "vn_linearize: %s must be quantities \"UNIT.VARIABLE\" (a string or a cell array of strings), got a %s",
+           what, class (c));
+  endif
+  c = c(:).';
+endfunction
+
+## 0-based output index; an input parameter given as output says which
+## outputs the unit has.
+function idx = output_index (net, name)
+  if (ischar (name) && any (name == "."))
+    dot = find (name == ".", 1);
+    uname = name(1:dot-1);
+    var = name(dot+1:end);
+    if (isfield (net.index, uname))
+      k = vn_schema ().(net.units(net.index.(uname)).kind);
+      if (any (strcmp (k.params, var)) && ! any (strcmp (k.outputs, var)))
+        error ("Octave:invalid-input-arg",
+               "vn_linearize: output \"%s\": %s is a parameter of %s \"%s\", not an output; its outputs: %s",
+               name, var, net.units(net.index.(uname)).kind, uname,
+               strjoin (k.outputs, ", "));
+      endif
+    endif
+  endif
+  q = vn_quantity (net, name, "output", "vn_linearize");
+  idx = q.index;
+endfunction
+
+function t = shown (v)
+  if (ischar (v))
+    t = ["\"" v "\""];
+  else
+    t = sprintf ("a %s", class (v));
+  endif
+endfunction
+
+%!demo
+%! ## Invented example: a buffer tank at a brewery's water works feeds a
+%! ## second tank through a pipe; linearise about the steady state.
+%! net = vn_network ("brewhouse water");
+%! net = vn_tank (net, "T1", "area", 3, "level", 1.2);
+%! net = vn_tank (net, "T2", "area", 1.5, "level", 0.8);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.004);
+%! net = vn_resistance (net, "R1", "T1", "T2", "r", 200);
+%! net = vn_orifice (net, "O2", "T2", "", "coeff", 0.006);
+%! op = vn_steady (net);
+%! lin = vn_linearize (net, op, {"F1.flow"}, {"T1.level", "T2.level"});
+%! printf ("time constants %.1f s and %.1f s\n", lin.tau);
+%! printf ("gains %.1f and %.1f m per m3/s\n", lin.gain);
+
+%!shared net, op
+%! ## Square-root tank: A 2 m2, h_s 1.5 m, F_s 0.01 m3/s, coefficient so
+%! ## that h_s is the steady level.
+%! net.type = "vesselnet.network";
+%! net.name = "one tank";
+%! net.options = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
+%!                       "ambient", 15, "thermal", false, "species", {{}},
+%!                       "decay", [], "smooth", 1e-3);
+%! net.units = struct ("name", {"T1", "O1", "F1"},
+%!                     "kind", {"tank", "orifice", "feed"},
+%!                     "from", {"", "T1", ""}, "to", {"", "", "T1"},
+%!                     "par", {struct("area", 2, "level", 1.5), ...
+%!                             struct("coeff", 0.01/sqrt(1.5)), ...
+%!                             struct("flow", 0.01)},
+%!                     "table", {[], [], []},
+%!                     "aux", {struct(), struct(), struct()});
+%! net.index = struct ("T1", 1, "O1", 2, "F1", 3);
+%! op = struct ("x", 3, "net", net, "states", {{"T1.volume"}});
+
+%!test
+%! ## tau = 2 A h_s/F_s = 600 s, gain 2 h_s/F_s = 300 s/m2 (Seborg et al.,
+%! ## Process Dynamics and Control, linearised square-root tank, memory).
+%! lin = vn_linearize (net, op, "F1.flow", "T1.level");
+%! assert (lin.tau, 600, 1e-9);
+%! assert (lin.poles, -1/600, 1e-12);
+%! assert (lin.gain, 300, 1e-9);
+%! assert (lin.A, -1/600, 1e-12);
+%! assert (lin.C, 0.5, 1e-12);
+%! assert (lin.states, {"T1.volume"});
+%! assert (lin.inputs, {"F1.flow"});
+%! ## G(s) = 300/(600 s + 1): num/den = 0.5 / (s + 1/600).
+%! assert (lin.num, 0.5, 1e-12);
+%! assert (lin.den, [1, 1/600], 1e-12);
+%! assert (isempty (lin.zeros));
+%! assert (lin.op, op);
+%! assert (lin.note, "");
+
+%!test
+%! ## Outflow O1.flow: gain 1 at steady state (mass balance), D = 0; the
+%! ## feed's own flow is an output with D = 1 (analytic).
+%! lin = vn_linearize (net, op, {"F1.flow"}, {"O1.flow", "F1.flow", "T1.volume"});
+%! assert (lin.gain, [1; 1; 600], 1e-9);
+%! assert (lin.D, [0; 1; 0]);
+%! assert (isempty (lin.num));
+
+%!test
+%! ## The sparse form holds the same Jacobian as the dense one.
+%! ls = vn_linearize (net, op, "F1.flow", "T1.level", "sparse", true);
+%! assert (issparse (ls.A));
+%! assert (full (ls.A), -1/600, 1e-12);
+%! assert (ls.gain, 300, 1e-9);
+%! ld = vn_linearize (net, op, "F1.flow", "T1.level", "dense", true);
+%! assert (! issparse (ld.A));
+
+%!error <no unit "F9"> vn_linearize (net, op, "F9.flow", "T1.level")
+%!error <level is not an input> vn_linearize (net, op, "T1.level", "T1.level")
+%!error <area is a parameter of tank "T1", not an output; its outputs: level, volume, head, spill> vn_linearize (net, op, "F1.flow", "T1.area")
+%!error <not an output of tank> vn_linearize (net, op, "F1.flow", "T1.depth")
+%!error <UNIT.VARIABLE> vn_linearize (net, op, "F1.flow", {3})
+%!error <UNIT.VARIABLE> vn_linearize (net, op, "F1.flow", 3)
+%!error <another network> vn_linearize (net, [3; 1], "F1.flow", "T1.level")
+%!error <another network: its units differ> vn_linearize (net, setfield (op, "net", setfield (net, "units", net.units(1:2))), "F1.flow", "T1.level")
+%!error <another network: its states> vn_linearize (net, setfield (op, "states", {"T9.volume"}), "F1.flow", "T1.level")
+%!error <must be "open"> vn_linearize (net, op, "F1.flow", "T1.level", "loop", "closed")
+%!error <given twice> vn_linearize (net, op, {"F1.flow", "F1.flow"}, "T1.level")
+%!error <unknown option> vn_linearize (net, op, "F1.flow", "T1.level", "foo", 1)
+%!error vn_linearize (net, op, "F1.flow")
