@@ -49,5 +49,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_boundary = {
   "boundary", VN_ROLE_NODE, NPAR, par, 1, out, ounit,
-  check, NULL, NULL, NULL, node, NULL, NULL, outputs
+  check, NULL, NULL, NULL, node, NULL, NULL, NULL, outputs
 };

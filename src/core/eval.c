@@ -46,10 +46,18 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
       if (u->k->role == VN_ROLE_NODE)
         u->k->node (net, u, x, &net->nd[i]);
     }
-  /* own dynamics and element flows */
+  /* controllers and switches set the inputs they drive */
+  for (int i = 0; i < net->nu; i++)
+    if (net->u[i].k->pre)
+      net->u[i].k->pre (net, &net->u[i], x);
+  /* own dynamics and element flows; controllers' own states last, once
+   * the flows they may measure are known */
+  for (int pass = 0; pass < 2; pass++)
   for (int i = 0; i < net->nu; i++)
     {
       vn_unit *u = &net->u[i];
+      if ((pass == 1) != (u->k->role == VN_ROLE_OTHER))
+        continue;
       if (u->k->own && u->nx > 0)
         {
           vn_lf df[VN_OWNMAX];

@@ -58,5 +58,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_feed = {
   "feed", VN_ROLE_LINK, NPAR, par, 1, out, ounit,
-  check, NULL, NULL, NULL, NULL, flow, NULL, outputs
+  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, outputs
 };

@@ -87,14 +87,29 @@ void vn_trip_free (vn_trip *T)
 
 /* Add sign * d to row `row`: state columns to tx, parameter columns to
  * tp (either may be NULL). */
+static void emit (vn_net *net, int row, double sign, const vn_lf *d,
+                  vn_trip *tx, vn_trip *tp, int depth)
+{
+  for (int i = 0; i < d->n; i++)
+    {
+      int c = d->col[i];
+      if (d->isp[i] && net->override && net->override[c] >= 0 && depth < 8)
+        {
+          /* an input set by a controller: chain through its output */
+          emit (net, row, sign * d->v[i], &net->u[net->override[c]].dq, tx,
+                tp, depth + 1);
+          continue;
+        }
+      vn_trip *T = d->isp[i] ? tp : tx;
+      if (T)
+        vn_trip_add (T, row, c, sign * d->v[i]);
+    }
+}
+
+/* Emission also resolves inputs driven by controllers and switches: the
+ * derivative passes through the controller's output to its states. */
 void vn_emit (vn_net *net, int row, double sign, const vn_lf *d,
               vn_trip *tx, vn_trip *tp)
 {
-  (void) net;
-  for (int i = 0; i < d->n; i++)
-    {
-      vn_trip *T = d->isp[i] ? tp : tx;
-      if (T)
-        vn_trip_add (T, row, d->col[i], sign * d->v[i]);
-    }
+  emit (net, row, sign, d, tx, tp, 0);
 }

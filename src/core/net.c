@@ -56,6 +56,8 @@ void vn_net_free (vn_net *net)
   free (net->colptr);
   free (net->rowind);
   free (net->map);
+  free (net->override);
+  free (net->ev);
   free (net);
 }
 
@@ -358,6 +360,22 @@ int vn_initial_state (vn_net *net, double *x0)
       else
         for (int j = 0; j < u->nx; j++)
           x0[u->xoff + j] = 0;
+    }
+  /* controllers' filters start at their measurement; a measured flow
+   * depends on what the controller does, so settle a few times */
+  for (int pass = 0; pass < 3; pass++)
+    {
+      int any = 0;
+      for (int i = 0; i < net->nu; i++)
+        any |= net->u[i].k == &vn_kind_controller && net->u[i].nx > 0;
+      if (!any)
+        break;
+      int st = vn_eval (net, 0, x0, NULL, NULL, 0, 0, 0, 0);
+      if (st)
+        return st;
+      for (int i = 0; i < net->nu; i++)
+        if (net->u[i].k == &vn_kind_controller)
+          vn_controller_settle (net, &net->u[i], x0);
     }
   return VN_OK;
 }

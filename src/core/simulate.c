@@ -25,7 +25,75 @@ typedef struct sim {
   vn_net *net;
   int interrupted;
   int rhs_fail;
+  int nsw;
+  int *sw;          /* unit index of each switch */
+  double *scratch;  /* nx, for root evaluations */
 } sim;
+
+/* Root functions: one per switch, crossing upwards when it must act. */
+static int cv_root (sunrealtype t, N_Vector y, sunrealtype *g, void *ud)
+{
+  sim *S = ud;
+  vn_net *net = S->net;
+  const double *x = N_VGetArrayPointer (y);
+  vn_apply_signals (net, t);
+  if (vn_eval (net, t, x, S->scratch, NULL, 0, 0, 0, 0))
+    return 1;
+  for (int i = 0; i < S->nsw; i++)
+    g[i] = vn_switch_root (net, &net->u[S->sw[i]], x);
+  return 0;
+}
+
+static int log_event (vn_net *net, double t, int unit, double value)
+{
+  if (net->nev == net->capev)
+    {
+      long cap = net->capev ? 2 * net->capev : 64;
+      vn_event *e = realloc (net->ev, (size_t) cap * sizeof *e);
+      if (!e)
+        return VN_ENOMEM;
+      net->ev = e;
+      net->capev = cap;
+    }
+  net->ev[net->nev].t = t;
+  net->ev[net->nev].unit = unit;
+  net->ev[net->nev].value = value;
+  net->nev++;
+  return VN_OK;
+}
+
+long vn_nevents (const vn_net *net) { return net->nev; }
+
+int vn_event_get (const vn_net *net, long i, double *t, int *unit,
+                  double *value)
+{
+  if (i < 0 || i >= net->nev)
+    return VN_EARG;
+  *t = net->ev[i].t;
+  *unit = net->ev[i].unit;
+  *value = net->ev[i].value;
+  return VN_OK;
+}
+
+/* Switches found at a root: flip those whose function crossed upwards. */
+static int switch_at_root (sim *S, void *mem, double t, const double *x)
+{
+  int rf[64];
+  int n = S->nsw < 64 ? S->nsw : 64;
+  if (CVodeGetRootInfo (mem, rf) != CV_SUCCESS)
+    return VN_ESOLVER;
+  for (int i = 0; i < n; i++)
+    if (rf[i] > 0)
+      {
+        vn_unit *u = &S->net->u[S->sw[i]];
+        vn_switch_flip (S->net, u);
+        vn_apply_signals (S->net, t);
+        vn_eval (S->net, t, x, S->scratch, NULL, 0, 0, 0, 0);
+        if (log_event (S->net, t, S->sw[i], u->q))
+          return VN_ENOMEM;
+      }
+  return VN_OK;
+}
 
 static int cv_rhs (sunrealtype t, N_Vector y, N_Vector ydot, void *ud)
 {
@@ -162,7 +230,28 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
   if (st)
     return st;
 
-  sim S = {net, 0, 0};
+  sim S = {net, 0, 0, 0, NULL, NULL};
+  net->nev = 0;
+  for (int i = 0; i < net->nu; i++)
+    S.nsw += net->u[i].k == &vn_kind_switch;
+  if (S.nsw > 64)
+    {
+      free (bp);
+      return vn_fail (net, VN_EARG, "simulate: at most 64 switches are "
+                      "supported, the network has %d", S.nsw);
+    }
+  S.sw = malloc ((size_t) (S.nsw + 1) * sizeof *S.sw);
+  S.scratch = malloc ((size_t) net->nx * sizeof *S.scratch);
+  if (!S.sw || !S.scratch)
+    {
+      free (bp);
+      free (S.sw);
+      free (S.scratch);
+      return VN_ENOMEM;
+    }
+  for (int i = 0, j = 0; i < net->nu; i++)
+    if (net->u[i].k == &vn_kind_switch)
+      S.sw[j++] = i;
   SUNContext ctx = NULL;
   N_Vector y = NULL, cons = NULL;
   SUNMatrix J = NULL;
@@ -186,6 +275,14 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
     for (int i = 0; i < net->nx; i++)
       c[i] = strcmp (vn_state_var (net, i), "volume") == 0 ? 1.0 : 0.0;
   }
+  /* switches start at offvalue unless the measurement is beyond "on" */
+  if (S.nsw)
+    {
+      vn_apply_signals (net, tout[0]);
+      vn_eval (net, tout[0], x0, S.scratch, NULL, 0, 0, 0, 0);
+      for (int i = 0; i < S.nsw; i++)
+        vn_switch_start (net, &net->u[S.sw[i]], x0);
+    }
   store (net, 0, nt, tout[0], x0, X, Y);
   mem = CVodeCreate (CV_BDF, ctx);
   if (!mem)
@@ -198,7 +295,8 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
       || (flag = CVodeSetUserData (mem, &S)) != CV_SUCCESS
       || (flag = CVodeSetMaxNumSteps (mem, maxsteps)) != CV_SUCCESS
       || (flag = CVodeSetConstraints (mem, cons)) != CV_SUCCESS
-      || (opt.hmax > 0 && (flag = CVodeSetMaxStep (mem, opt.hmax)) != CV_SUCCESS))
+      || (opt.hmax > 0 && (flag = CVodeSetMaxStep (mem, opt.hmax)) != CV_SUCCESS)
+      || (S.nsw && (flag = CVodeRootInit (mem, S.nsw, cv_root)) != CV_SUCCESS))
     {
       st = vn_fail (net, VN_ESOLVER, "simulate: setting up CVODES failed "
                     "(%s)", CVodeGetReturnFlagName (flag));
@@ -256,6 +354,21 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
               goto stats;
             }
           t = tr;
+          if (flag == CV_ROOT_RETURN)
+            {
+              /* a switch acts: log it and restart from here */
+              if ((st = switch_at_root (&S, mem, tr, N_VGetArrayPointer (y))))
+                goto stats;
+              if ((flag = CVodeReInit (mem, tr, y)) != CV_SUCCESS)
+                {
+                  st = vn_fail (net, VN_ESOLVER, "simulate: restart after "
+                                "a switch at t = %g failed (%s)", tr,
+                                CVodeGetReturnFlagName (flag));
+                  goto stats;
+                }
+              stats->restarts++;
+              continue;
+            }
           /* outputs at a breakpoint take the input after it */
           if (tout[k] >= seg && b < nbp)
             net->seg_end = INFINITY;
@@ -265,7 +378,7 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
         }
       if (b < nbp)
         {
-          if (t < seg)
+          while (t < seg)
             {
               double tr;
               flag = CVode (mem, seg, y, &tr, CV_NORMAL);
@@ -280,6 +393,19 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
                   goto stats;
                 }
               t = tr;
+              if (flag == CV_ROOT_RETURN)
+                {
+                  if ((st = switch_at_root (&S, mem, tr,
+                                            N_VGetArrayPointer (y))))
+                    goto stats;
+                  if (CVodeReInit (mem, tr, y) != CV_SUCCESS)
+                    {
+                      st = vn_fail (net, VN_ESOLVER, "simulate: restart "
+                                    "after a switch at t = %g failed", tr);
+                      goto stats;
+                    }
+                  stats->restarts++;
+                }
             }
           /* restart past the breakpoint: the inputs may jump here */
           b++;
@@ -322,5 +448,7 @@ done:
   if (ctx)
     SUNContext_Free (&ctx);
   free (bp);
+  free (S.sw);
+  free (S.scratch);
   return st;
 }

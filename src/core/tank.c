@@ -397,5 +397,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_tank = {
   "tank", VN_ROLE_NODE, NPAR, par, 4, out, ounit,
-  check, nstates, state_var, init, node, NULL, NULL, outputs
+  check, nstates, state_var, init, node, NULL, NULL, NULL, outputs
 };

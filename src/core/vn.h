@@ -169,6 +169,11 @@ typedef struct vn_steady_info {
 int vn_steady (vn_net *net, double *x, const vn_steady_opts *opts,
                vn_steady_info *info);
 
+/* Switching log of the last simulation: time, unit, new output. */
+long vn_nevents (const vn_net *net);
+int vn_event_get (const vn_net *net, long i, double *t, int *unit,
+                  double *value);
+
 #ifdef __cplusplus
 }
 #endif

@@ -89,10 +89,20 @@ struct vn_kind {
   /* own state derivatives (actuator lags, ...); rows u->xoff.. */
   void (*own) (vn_net *net, vn_unit *u, const double *x, double *f,
                vn_lf *df);
+  /* controllers and switches: set the manipulated input after the nodes
+   * are known, before any flow is computed */
+  void (*pre) (vn_net *net, vn_unit *u, const double *x);
   /* outputs, after nodes and flows are known */
   void (*outputs) (vn_net *net, vn_unit *u, const vn_node *nd,
                    const double *x, double *y, vn_lf *dy);
 };
+
+/* Switching log */
+typedef struct vn_event {
+  double t;
+  int unit;
+  double value;
+} vn_event;
 
 typedef struct vn_signal {
   int pidx, off, len, hold;
@@ -124,6 +134,11 @@ struct vn_net {
   long nnz;
   long *colptr, *rowind, *map;
   long nmap;
+  /* inputs set by a controller or switch: that unit, else -1 */
+  int *override;
+  int nsw;              /* switches */
+  vn_event *ev;
+  long nev, capev;
   /* caller's stop flag */
   int (*stop) (void *);
   void *stop_data;
@@ -132,7 +147,22 @@ struct vn_net {
 
 /* kinds */
 extern const vn_kind vn_kind_tank, vn_kind_boundary, vn_kind_feed,
-  vn_kind_orifice, vn_kind_resistance, vn_kind_valve, vn_kind_pump;
+  vn_kind_orifice, vn_kind_resistance, vn_kind_valve, vn_kind_pump,
+  vn_kind_controller, vn_kind_switch;
+
+/* Measured quantity of a controller or switch: ref[0] unit, ref[1] its
+ * output; the value and its derivative (NULL: not wanted). */
+double vn_measure (vn_net *net, const vn_unit *u, const double *x,
+                   vn_lf *dm);
+/* Check the measure/manipulate references and claim the manipulated
+ * input (net->override) for unit u. */
+int vn_check_loop_refs (vn_net *net, vn_unit *u);
+void vn_controller_settle (vn_net *net, vn_unit *u, double *x);
+double vn_switch_root (vn_net *net, vn_unit *u, const double *x);
+void vn_switch_flip (vn_net *net, vn_unit *u);
+void vn_switch_start (vn_net *net, vn_unit *u, const double *x);
+
+
 
 /* messages */
 int vn_fail (vn_net *net, int status, const char *fmt, ...)

@@ -1,4 +1,5 @@
-// [t, X, Y, stats, states] = __vn_simulate__ (pk, sig, tout, x0, opts)
+// [X, Y, stats, states, events] = __vn_simulate__ (pk, sig, tout, x0, opts)
+// events: one row per switching [t, unit (1-based), new output].
 // Integrate a packed network; x0 empty = from the declared levels.
 #include "vn_gateway.h"
 
@@ -62,5 +63,16 @@ DEFUN_DLD (__vn_simulate__, args, ,
   for (int i = 0; i < nx; i++)
     names(i) = std::string (vn_unit_name (net, vn_state_unit (net, i)))
                + "." + vn_state_var (net, i);
-  return ovl (X, Y, sm, names);
+  long ne = vn_nevents (net);
+  Matrix ev (ne, 3);
+  for (long i = 0; i < ne; i++)
+    {
+      double t, v;
+      int u;
+      vn_event_get (net, i, &t, &u, &v);
+      ev(i, 0) = t;
+      ev(i, 1) = u + 1;
+      ev(i, 2) = v;
+    }
+  return ovl (X, Y, sm, names, ev);
 }
