@@ -10,6 +10,8 @@
 #include <string.h>
 #include "vn.h"
 
+#define VN_TEST_PI 3.14159265358979323846
+
 static int vt_pass, vt_fail;
 
 /* One check: prints "ok - ..." or "FAIL - ..." and counts it. */
