@@ -1,0 +1,78 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{opt} =} plot_options (@var{args})
+## Parse the name/value options of @code{vn_plot} into @var{opt} with
+## fields @code{file}, @code{title}, @code{figure}, @code{time},
+## @code{color} and @code{size}; check each value.
+## @end deftypefn
+
+function opt = plot_options (args)
+  opt = struct ("file", "", "title", [], "figure", [], "time", "auto",
+                "color", false, "size", [900 600]);
+  if (mod (numel (args), 2) != 0)
+    error ("Octave:invalid-input-arg",
+           "vn_plot: options come in name/value pairs");
+  endif
+  for i = 1:2:numel (args)
+    name = args{i};
+    val = args{i+1};
+    if (! ischar (name))
+      error ("Octave:invalid-input-arg",
+             "vn_plot: option names must be strings");
+    endif
+    switch (lower (name))
+      case "file"
+        if (! ischar (val) || isempty (val) || rows (val) != 1)
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"file\" must be a file name, e.g. \"trend.png\"");
+        endif
+        opt.file = val;
+      case "title"
+        if (! ischar (val) || rows (val) > 1)
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"title\" must be a string");
+        endif
+        opt.title = val;
+      case "figure"
+        if (! (isscalar (val) && isfigure (val)))
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"figure\" must be the handle of an open figure");
+        endif
+        opt.figure = val;
+      case "time"
+        allowed = {"s", "min", "h", "auto"};
+        if (! ischar (val) || ! any (strcmp (allowed, val)))
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"time\" must be \"s\", \"min\", \"h\" or \"auto\", got %s",
+                 disp_value (val));
+        endif
+        opt.time = val;
+      case "color"
+        if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"color\" must be true or false");
+        endif
+        opt.color = logical (val);
+      case "size"
+        if (! (isnumeric (val) && numel (val) == 2 && all (val >= 100)
+               && all (val <= 10000) && all (val == fix (val))))
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"size\" must be [width height] in pixels, 100 to 10000");
+        endif
+        opt.size = val(:).';
+      otherwise
+        error ("Octave:invalid-input-arg",
+               "vn_plot: unknown option \"%s\"; allowed: file, title, figure, time, color, size",
+               name);
+    endswitch
+  endfor
+endfunction
+
+function s = disp_value (v)
+  if (ischar (v))
+    s = ["\"" v "\""];
+  elseif (isnumeric (v) || islogical (v))
+    s = mat2str (v);
+  else
+    s = class (v);
+  endif
+endfunction
