@@ -16,7 +16,9 @@
 ## @code{res.T1.level}, @code{res.T1.spill}, @code{res.O1.flow},
 ## @code{res.LV1.opening}; @code{res.units} gives their units of measure,
 ## @code{res.x} the states (@code{res.states} their names) and
-## @code{res.stats} the integrator's counts and wall time.
+## @code{res.stats} the integrator's counts and wall time; @code{res.events}
+## logs switchings (@code{t}, @code{unit}, @code{value}) of @code{vn_switch}
+## units.
 ##
 ## Options:
 ## @table @asis
@@ -99,8 +101,10 @@ function res = vn_simulate (net, tspan, varargin)
   so.solver = opt.solver;
   so.maxsteps = opt.maxsteps;
   so.maxstep = opt.maxstep;
-  [X, Y, stats, states] = __vn_simulate__ (pk, sig, tout, x0, so);
+  [X, Y, stats, states, ev] = __vn_simulate__ (pk, sig, tout, x0, so);
   res = vn_results (net, tout, X, Y, states, u);
+  res.events = struct ("t", ev(:,1), "unit", {{net.units(ev(:,2)).name}.'},
+                       "value", ev(:,3));
   res.stats = stats;
   res.net = net;
   res.signals = u;

@@ -41,6 +41,11 @@ function pk = vn_pack (net)
       case {"orifice", "resistance", "valve", "pump"}
         ref(1,i) = unit_index (net, u.from, u, "from");
         ref(2,i) = unit_index (net, u.to, u, "to");
+      case {"controller", "switch"}
+        who = sprintf ("%s \"%s\"", u.kind, u.name);
+        m = vn_quantity (net, u.aux.measure, "output", who);
+        c = vn_quantity (net, u.aux.manipulate, "input", who);
+        ref(:,i) = [m.unit-1; m.slot; c.unit-1; c.slot];
     endswitch
     f = fieldnames (u.par);
     for j = 1:numel (f)

@@ -48,6 +48,20 @@ function res = vn_results (net, t, X, Y, states, u)
       res.(un).(var) = vn_signal_values (u(i).t, u(i).v, u(i).hold, t);
     endif
   endfor
+  ## inputs driven by a controller or switch: what it set
+  for i = 1:numel (net.units)
+    un = net.units(i);
+    if (any (strcmp (un.kind, {"controller", "switch"})))
+      q = un.aux.manipulate;
+      dot = find (q == ".", 1);
+      tu = q(1:dot-1);
+      tv = q(dot+1:end);
+      k = s.(net.units(net.index.(tu)).kind);
+      if (! any (strcmp (k.outputs, tv)))
+        res.(tu).(tv) = res.(un.name).output;
+      endif
+    endif
+  endfor
   res.x = X;
   res.states = states;
   res.units = units;

@@ -344,6 +344,31 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
         vn_lf_p (&nd->dH, vn_pcol (u, DIAM),
                  dldA * VN_PI * net->p[u->poff + DIAM] / 2);
     }
+  else if (shape != TABLE)
+    {
+      /* round vessels: dlevel/dp = -(dV/dp at fixed level) / (dV/dlevel),
+       * inside the vessel's height (0 in the linear extensions) */
+      double R = u->d[D_R], h = l, in = V > 0 && V < u->d[D_VTOP];
+      double dVdD = 0, dVdL = 0, dVdH = 0;
+      if (in && shape == HORIZ)
+        {
+          double c = sqrt (fmax (0, 2 * R * h - h * h));
+          dVdD = u->d[D_L] * (R * acos ((R - h) / R) - c);
+          dVdL = V / u->d[D_L];
+        }
+      else if (in && shape == SPHERE)
+        dVdD = VN_PI * h * h / 2;
+      else if (in && shape == CONE)
+        {
+          dVdD = V / R;
+          dVdH = -2 * V / u->d[D_HTOP];
+        }
+      vn_lf_p (&nd->dH, vn_pcol (u, DIAM), -dVdD * dldV);
+      if (shape == HORIZ)
+        vn_lf_p (&nd->dH, vn_pcol (u, LEN), -dVdL * dldV);
+      if (shape == CONE)
+        vn_lf_p (&nd->dH, vn_pcol (u, HEIGHT), -dVdH * dldV);
+    }
   vn_lf_p (&nd->dH, vn_pcol (u, BASE), 1);
   /* spill over the rim (Francis) */
   double H = l - u->d[D_RIM];
@@ -366,6 +391,10 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
       if (vn_given (net, u, RIM))
         vn_lf_p (&u->dq, vn_pcol (u, RIM), -dqdH);
       else if (shape == PRISM && vn_given (net, u, HEIGHT))
+        vn_lf_p (&u->dq, vn_pcol (u, HEIGHT), -dqdH);
+      else if (shape == HORIZ || shape == SPHERE)
+        vn_lf_p (&u->dq, vn_pcol (u, DIAM), -dqdH);   /* rim = top */
+      else if (shape == CONE)
         vn_lf_p (&u->dq, vn_pcol (u, HEIGHT), -dqdH);
       /* the crest, given or (prism) the perimeter of a round plan */
       if (vn_given (net, u, CREST))

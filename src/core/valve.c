@@ -35,6 +35,11 @@ static int check (vn_net *net, vn_unit *u)
     return st;
   if (!vn_given (net, u, KV))
     return vn_fail_unit (net, u, "kv (m3/h at 1 bar) is required");
+  /* the lag owns a state: once built, it cannot come or go */
+  if (u->nx && !(net->p0[u->poff + LAG] > 0))
+    return vn_fail_unit (net, u, "lag must stay > 0 (s) on a valve built "
+                         "with an actuator lag, got %g",
+                         net->p0[u->poff + LAG]);
   return VN_OK;
 }
 

@@ -141,7 +141,7 @@ typedef struct vn_steady_opts {
   int maxiter;             /* Newton iterations per attempt, default 60 */
   double tol;              /* relative residual tolerance, default 1e-10 */
   int solver;              /* VN_SOLVER_*: dense LU or KLU */
-  int simulate;            /* 0: no simulation fallback on failure */
+  int simulate;            /* < 0: no simulation fallback on failure */
   /* inverse problem: adjust nadj inputs (parameter indices) so that
    * outputs yout (output indices) reach target; nadj must equal ntgt */
   int nadj;

@@ -1,0 +1,22 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{v} =} loop_scalar (@var{v}, @var{field}, @var{name}, @var{fn}, @var{infok})
+## Check a real scalar option (finite unless @var{infok}).
+## @end deftypefn
+
+function v = loop_scalar (v, field, name, fn, infok)
+  if (! (isnumeric (v) && isreal (v) && isscalar (v)) || isnan (v)
+      || (! infok && isinf (v)))
+    error ("Octave:invalid-input-arg",
+           "%s: unit \"%s\": %s must be a real finite scalar, got %s", fn,
+           name, upper (field), mat2str_safe (v));
+  endif
+  v = double (v);
+endfunction
+
+function s = mat2str_safe (v)
+  if (isnumeric (v) && numel (v) <= 4)
+    s = mat2str (v);
+  else
+    s = sprintf ("a %s of size %s", class (v), mat2str (size (v)));
+  endif
+endfunction

@@ -1,0 +1,133 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{net} =} vn_controller (@var{net}, @var{name}, @qcode{"measure"}, @var{q}, @qcode{"manipulate"}, @var{input}, @dots{})
+## Add a PI/PID controller to a network.
+##
+## The controller measures any output quantity @var{q} (@qcode{"T2.level"},
+## @qcode{"O1.flow"}, @dots{}) and drives any input (@qcode{"LV1.opening"},
+## @qcode{"P1.speed"}, @qcode{"F1.flow"}, another controller's
+## @qcode{"setpoint"} for a cascade).  Ideal (ISA) form,
+## @code{u = bias + Kc (e + I/Ti + Td de/dt)}, with derivative on the
+## measurement (filtered, time constant @code{alpha Td}), output limits and
+## anti-windup by back-calculation.
+##
+## Options:
+## @table @asis
+## @item @qcode{"setpoint"}
+## setpoint in the measured unit (an input: a signal may drive it).
+## @item @qcode{"gain"}
+## Kc in engineering units: output units per measured unit (for a valve
+## opening 0..1 and a level in m, 1/m).  A gain given in percent of span,
+## Kc%, converts as @code{Kc = Kc% * (output span) / (measurement span)}.
+## @item @qcode{"reset"}
+## integral time Ti (s); Inf (default) for P only.
+## @item @qcode{"deriv"}
+## derivative time Td (s), default 0.
+## @item @qcode{"action"}
+## @qcode{"reverse"} (default: the output rises when the measurement falls
+## below setpoint, e = setpoint - measurement, as for a valve on a feed that
+## holds a level) or @qcode{"direct"} (the output rises with the
+## measurement, as for a valve on an outlet that holds a level).
+## @item @qcode{"limits"}
+## [lo hi] output limits (default none; give [0 1] for a valve).
+## @item @qcode{"bias"}
+## output at zero error; default the driven input's declared value.
+## @item @qcode{"filter"}
+## measurement filter time constant (s); default 0 for tank quantities and
+## 1 s (a transmitter lag) for flows and other instantaneous quantities.
+## @item @qcode{"antiwindup"}
+## true (default) or false.
+## @item @qcode{"alpha"}
+## derivative filter as a fraction of Td (default 0.1).
+## @end table
+##
+## The controller's output is reported as @code{res.NAME.output}, with
+## @code{res.NAME.measurement} and @code{res.NAME.error}.  Settings must be
+## reviewed before they reach a live loop: a model's tuning is a starting
+## point, not a commissioning result.
+## @seealso{vn_switch, vn_tune, vn_simulate}
+## @end deftypefn
+
+function net = vn_controller (net, name, varargin)
+  if (nargin < 2)
+    print_usage ();
+  endif
+  fn = "vn_controller";
+  loop_check_net (net, name, fn);
+  allowed = {"measure", "manipulate", "setpoint", "gain", "reset", "deriv", ...
+             "action", "limits", "bias", "filter", "antiwindup", "alpha"};
+  o = loop_options (varargin, allowed, fn, name);
+  for req = {"measure", "manipulate", "setpoint", "gain"}
+    if (! isfield (o, req{1}))
+      error ("Octave:invalid-input-arg",
+             "%s: controller \"%s\": %s is required", fn, name,
+             upper (req{1}));
+    endif
+  endfor
+  aux = loop_refs (net, name, o, fn);
+  par = struct ();
+  par.setpoint = loop_scalar (o.setpoint, "setpoint", name, fn, false);
+  par.gain = loop_scalar (o.gain, "gain", name, fn, false);
+  if (par.gain == 0)
+    error ("Octave:invalid-input-arg",
+           "%s: controller \"%s\": GAIN must not be 0 (sign goes in ACTION)",
+           fn, name);
+  endif
+  for f = {"reset", "deriv", "bias", "filter", "alpha"}
+    if (isfield (o, f{1}))
+      par.(f{1}) = loop_scalar (o.(f{1}), f{1}, name, fn, strcmp (f{1}, "reset"));
+    endif
+  endfor
+  if (isfield (o, "action"))
+    a = o.action;
+    if (! ischar (a) || ! any (strcmpi (a, {"reverse", "direct"})))
+      error ("Octave:invalid-input-arg",
+             "%s: controller \"%s\": ACTION must be \"reverse\" or \"direct\"",
+             fn, name);
+    endif
+    par.action = double (strcmpi (a, "reverse"));
+    aux.action = lower (a);
+  endif
+  if (isfield (o, "limits"))
+    L = o.limits;
+    if (! (isnumeric (L) && isreal (L) && numel (L) == 2 && L(1) < L(2)
+           && ! any (isnan (L))))
+      error ("Octave:invalid-input-arg",
+             "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi",
+             fn, name);
+    endif
+    par.lo = L(1);
+    par.hi = L(2);
+  endif
+  if (isfield (o, "antiwindup"))
+    par.antiwindup = double (logical (o.antiwindup));
+  endif
+  net = loop_append (net, name, "controller", par, aux);
+endfunction
+
+%!shared net
+%! net = vn_network ("c");
+%! net = vn_tank (net, "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 60, "opening", 0.5);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
+%!                      "LV1.opening", "setpoint", 1, "gain", 2, ...
+%!                      "reset", 300, "action", "direct", "limits", [0 1]);
+%!test
+%! u = net.units(net.index.LC1);
+%! assert (u.kind, "controller");
+%! assert (u.aux.measure, "T1.level");
+%! assert (u.aux.manipulate, "LV1.opening");
+%! assert ([u.par.gain u.par.reset u.par.action u.par.lo u.par.hi], [2 300 0 0 1]);
+%!test
+%! ## a PI loop removes the offset after a load step (common practice)
+%! u = vn_signal ("F1.flow", "step", 600, 0.01, 0.013);
+%! res = vn_simulate (net, [0 6000], u, "dt", 10);
+%! assert (res.T1.level(end), 1, 2e-3);
+%! assert (max (res.T1.level) > 1.01);
+%! assert (all (res.LC1.output >= 0 & res.LC1.output <= 1));
+%!error <LC1.*MEASURE> vn_controller (vn_network ("c"), "LC1", "manipulate", "X.y", "setpoint", 1, "gain", 1)
+%!error <"LC2".*already driven> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 1)
+%!error <no unit "T9"> vn_controller (net, "LC2", "measure", "T9.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 1)
+%!error <GAIN must not be 0> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 0)
+%!error <ACTION> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "action", "sideways")
+%!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
