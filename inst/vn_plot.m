@@ -150,3 +150,226 @@ function s = step_title (sr)
     endif
   endif
 endfunction
+
+%!demo
+%! ## Invented: a 2 m2 holding tank with an orifice outlet filling from
+%! ## 1 m to its steady level under a constant feed (trends in minutes).
+%! t = (0:10:3600)';
+%! res.t = t;
+%! res.T1.level = 1.44 - 0.44 * exp (-t / 480);
+%! res.O1.flow = 0.01 * sqrt (res.T1.level);
+%! res.F1.flow = 0.012 * ones (size (t));
+%! res.units = struct ("T1", struct ("level", "m"),
+%!                     "O1", struct ("flow", "m3/s"), "F1", struct ("flow", "m3/s"));
+%! vn_plot (res, {"T1.level", "O1.flow", "F1.flow"}, "title", "invented holding tank");
+
+%!demo
+%! ## Invented: step of a feed into a tank, nonlinear against linear.
+%! t = (0:10:2400)';
+%! yl = 0.4 * (1 - exp (-t / 480));
+%! sr = struct ("t", t, "nonlinear", 1.05 * yl, "linear", yl,
+%!              "outputs", {{"T1.level"}}, "input", "F1.flow", "size", 0.002,
+%!              "metrics", struct ("gain", 210, "final", 0.42, "t63", 480,
+%!                                 "rise", 1055, "settle", 1878, "overshoot", 0));
+%! vn_plot (sr);
+
+## ---- trends ----------------------------------------------------------
+
+%!shared res, t, dax
+%! ## Data axes of a figure (a legend is an axes too, holding copies).
+%! dax = @(h) findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ## Fake result of an hour: two levels (m) and one flow (m3/s).
+%! t = (0:10:3600)';
+%! res.t = t;
+%! res.T1.level = 1.44 - 0.44 * exp (-t / 480);
+%! res.T2.level = 0.5 + t / 7200;
+%! res.O1.flow = 0.01 * sqrt (res.T1.level);
+%! res.units = struct ("T1", struct ("level", "m"), "T2", struct ("level", "m"),
+%!                     "O1", struct ("flow", "m3/s"));
+
+%!test
+%! ## Quantities sharing a unit share an axes: 2 units -> 2 axes.
+%! h = vn_plot (res, {"T1.level", "O1.flow", "T2.level"});
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (numel (ax), 2);
+%! labels = sort (cellfun (@(a) get (get (a, "ylabel"), "string"), num2cell (ax),
+%!                         "uniformoutput", false));
+%! assert (labels, sort ({"level (m)"; "flow (m3/s)"}));
+%! ## A run of 3600 s is shown in minutes: the curves end at 60.
+%! kids = findobj (dax (h), "type", "line");
+%! xmax = max (cellfun (@(k) max ([get(k, "xdata"), -Inf]), num2cell (kids)));
+%! assert (xmax, 60, 1e-12);
+%! xl = get (get (ax(end), "xlabel"), "string");
+%! xl = [xl, get(get (ax(1), "xlabel"), "string")];
+%! assert (xl, "time (min)");
+%! ## The level curve is the data, divided by nothing but the time factor.
+%! full = findobj (dax (h), "type", "line", "marker", "none", "linestyle", "-");
+%! y = cellfun (@(k) numel (get (k, "ydata")), num2cell (full));
+%! assert (any (y == numel (t)));
+%! close (h);
+
+%!test
+%! ## Black lines told apart by style; every one of them black.
+%! h = vn_plot (res, {"T1.level", "T2.level"});
+%! kids = findobj (dax (h), "type", "line");
+%! c = cell2mat (get (kids, "color"));
+%! assert (c, zeros (size (c)));
+%! styles = get (findobj (dax (h), "type", "line", "marker", "none"), "linestyle");
+%! assert (sort (unique (styles)), sort ({"-"; "--"}));
+%! ## Sparse markers: about ten per curve, not one per sample (361).
+%! mk = findobj (dax (h), "type", "line", "linestyle", "none");
+%! n = cellfun (@(k) numel (get (k, "xdata")), num2cell (mk));
+%! assert (all (n >= 8 & n <= 11));
+%! close (h);
+
+%!test
+%! ## With colour the two curves differ in colour too.
+%! h = vn_plot (res, {"T1.level", "T2.level"}, "color", true);
+%! full = findobj (dax (h), "type", "line", "marker", "none");
+%! c = unique (cell2mat (get (full, "color")), "rows");
+%! assert (rows (c), 2);
+%! close (h);
+
+%!test
+%! ## Time unit: auto picks s for 10 min, h for 10 h; "time" overrides.
+%! r = res;
+%! r.t = t / 6;
+%! h = vn_plot (r, "T1.level");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (get (get (ax(1), "xlabel"), "string"), "time (s)");
+%! assert (get (ax(1), "xlim"), [0 600], 1e-12);
+%! r.t = t * 10;
+%! vn_plot (r, "T1.level", "figure", h);
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (get (get (ax(1), "xlabel"), "string"), "time (h)");
+%! assert (get (ax(1), "xlim"), [0 10], 1e-12);
+%! h2 = vn_plot (r, "T1.level", "figure", h, "time", "s");
+%! assert (h2, h);
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (get (ax(1), "xlim"), [0 36000], 1e-9);
+%! close (h);
+
+%!test
+%! ## Legend lists the quantity names.
+%! h = vn_plot (res, {"T1.level", "T2.level"});
+%! lg = findobj (h, "type", "axes", "tag", "legend");
+%! assert (get (lg, "string"), {"T1.level", "T2.level"});
+%! close (h);
+
+%!test
+%! ## PNG written at the size asked: PNG signature and IHDR width and
+%! ## height, big-endian at bytes 17-24 (PNG specification, ISO/IEC 15948).
+%! f = [tempname() ".png"];
+%! vn_plot (res, {"T1.level"}, "file", f, "size", [640 480]);
+%! fid = fopen (f, "r");
+%! b = fread (fid, 24, "uint8")';
+%! fclose (fid);
+%! unlink (f);
+%! assert (b(1:8), [137 80 78 71 13 10 26 10]);
+%! assert (b(17:20) * 256 .^ (3:-1:0)', 640);
+%! assert (b(21:24) * 256 .^ (3:-1:0)', 480);
+
+## ---- step response ---------------------------------------------------
+
+%!test
+%! ## First-order lag K/(tau s + 1), step du: 63.2 % = 1 - 1/e at t = tau;
+%! ## within 2 % from tau ln 50 on (analytic).  Markers sit there.
+%! K = 2;  tau = 300;  du = 0.002;
+%! tt = (0:10:1800)';
+%! y = K * du * (1 - exp (-tt / tau));
+%! m = struct ("gain", K, "t63", tau, "rise", tau * log (9),
+%!             "settle", tau * log (50), "overshoot", 0);
+%! sr = struct ("t", tt, "nonlinear", y, "linear", y, "outputs", {{"T1.level"}},
+%!              "input", "F1.flow", "size", du, "metrics", m);
+%! h = vn_plot (sr, "time", "s");
+%! up = findobj (dax (h), "type", "line", "marker", "^");
+%! assert (get (up, "xdata"), 300, 1e-12);
+%! assert (get (up, "ydata"), 0.004 * (1 - exp (-1)), 1e-12);
+%! dn = findobj (dax (h), "type", "line", "marker", "v");
+%! assert (get (dn, "xdata"), 300 * log (50), 1e-9);
+%! assert (get (dn, "ydata"), 0.004 * 0.98, 1e-7);
+%! ## Nonlinear solid, linear dashed.
+%! full = findobj (dax (h), "type", "line", "marker", "none");
+%! assert (sort (get (full, "linestyle")), sort ({"-"; "--"}));
+%! note = get (findobj (h, "type", "text", "units", "normalized"), "string");
+%! assert (any (strcmp (note, "63.2 % at 300 s, settled at 1174 s")));
+%! close (h);
+
+%!test
+%! ## Two outputs: two stacked axes; unsettled response says so.
+%! tt = (0:10:600)';
+%! y = [tt / 600, 1 - exp(-tt / 100)];
+%! m = struct ("gain", {1, 1}, "t63", {NaN, 100}, "rise", {NaN, 220},
+%!             "settle", {NaN, 391}, "overshoot", {0, 0});
+%! sr = struct ("t", tt, "nonlinear", y, "linear", [], "outputs", {{"T1.level", "T2.level"}},
+%!              "input", "F1.flow", "size", 1, "metrics", m);
+%! h = vn_plot (sr);
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (numel (ax), 2);
+%! txt = get (findobj (h, "type", "text", "units", "normalized"), "string");
+%! assert (any (strcmp (txt, "not settled")));
+%! close (h);
+
+## ---- frequency response ----------------------------------------------
+
+%!test
+%! ## Lag 2/(300 s + 1): |G| = 2/sqrt(1 + (300 w)^2), phase -atan(300 w) (analytic).
+%! w = logspace (-4, -1, 61)';
+%! G = 2 ./ (1i * w * 300 + 1);
+%! fr = struct ("w", w, "response", G, "magnitude", abs (G),
+%!              "phase", angle (G) * 180 / pi, "inputs", {{"F1.flow"}},
+%!              "outputs", {{"T1.level"}});
+%! h = vn_plot (fr);
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (numel (ax), 2);
+%! assert (get (ax, "xscale"), {"log"; "log"});
+%! assert (sort (get (ax, "yscale")), {"linear"; "log"});
+%! full = findobj (dax (h), "type", "line", "marker", "none");
+%! y = get (full, "ydata");
+%! mag = y{cellfun (@(v) all (v > 0), y)};
+%! assert (mag(:), 2 ./ sqrt (1 + (300 * w) .^ 2), 1e-12);
+%! ph = y{cellfun (@(v) any (v < 0), y)};
+%! assert (ph(:), -atand (300 * w), 1e-10);
+%! ## Phase 0 to -88 deg: ticks every 45 deg from -90 to 0.
+%! pa = ax(strcmp (get (ax, "yscale"), "linear"));
+%! assert (get (pa, "ytick"), [-90 -45 0]);
+%! lg = findobj (h, "type", "axes", "tag", "legend");
+%! assert (get (lg, "string"), {"F1.flow to T1.level"});
+%! close (h);
+
+## ---- fit against data ------------------------------------------------
+
+%!test
+%! ## Two experiments: a model and a residual axes each; residuals are
+%! ## measured - predicted.
+%! tt = (0:20:1200)';
+%! yp = 1 + 0.3 * (1 - exp (-tt / 200));
+%! ym = yp + 0.01 * sin (tt / 37);
+%! est.fit = struct ("t", {tt, tt}, "names", {{"T1.level"}, {"T1.level"}},
+%!                   "measured", {ym, 2 - ym}, "predicted", {yp, 2 - yp},
+%!                   "units", {{"m"}, {"m"}});
+%! h = vn_plot (est, "title", "check");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! assert (numel (ax), 4);
+%! r = findobj (dax (h), "type", "line", "markersize", 4);
+%! res2 = sort (cell2mat (get (r, "ydata")), 1);
+%! assert (res2, sort ([0.01 * sin(tt' / 37); -0.01 * sin(tt' / 37)], 1), 1e-12);
+%! ## Data as markers without line.
+%! d = findobj (dax (h), "type", "line", "markersize", 5);
+%! assert (get (d, "linestyle"), {"none"; "none"});
+%! close (h);
+
+## ---- errors ----------------------------------------------------------
+
+%!error <Invalid call> vn_plot ()
+%!error <no quantity "T9.level"; it has T1.level, T2.level, O1.flow> vn_plot (res, {"T9.level"})
+%!error <no quantity "T1.lvl"> vn_plot (res, "T1.lvl")
+%!error <cannot tell what to draw from a struct with fields a, b> vn_plot (struct ("a", 1, "b", 2))
+%!error <first argument must be> vn_plot (3)
+%!error <folder ".*no_such_folder_vn" does not exist> vn_plot (res, "T1.level", "file", "/no_such_folder_vn/x.png")
+%!error <option "time" must be "s", "min", "h" or "auto", got "days"> vn_plot (res, "T1.level", "time", "days")
+%!error <unknown option "colour"> vn_plot (res, {"T1.level"}, "colour", true)
+%!error <option "figure" must be the handle> vn_plot (res, {"T1.level"}, "figure", -17)
+%!error <applies to simulation results only> vn_plot (struct ("w", 1, "magnitude", 1, "phase", 0), {"T1.level"})
+%!error <EST.fit\(1\) measured \[2 1\] and predicted \[3 1\] must be 3 x 1> vn_plot (struct ("fit", struct ("t", [0;1;2], "names", {{"T1.level"}}, "measured", [1;2], "predicted", [1;2;3])))
+%!error <step response field "nonlinear" must be 3 x 1> vn_plot (struct ("t", [0;1;2], "nonlinear", [1;2], "linear", [], "outputs", {{"T1.level"}}))
