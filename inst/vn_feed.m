@@ -1,0 +1,54 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{net} =} vn_feed (@var{net}, @var{name}, @var{tank}, @qcode{"flow"}, @var{q}, @dots{})
+## Add a feed, a flow imposed into a tank from outside the network.
+##
+## The flow @var{q}, m3/s, is an input (signals may drive it; default 0);
+## a negative flow is a draw-off.  The feed goes into the declared tank
+## @var{tank}.  Options: @qcode{"flow"}, @qcode{"temperature"} (degC,
+## thermal networks) and one concentration per declared species.
+##
+## @seealso{vn_network, vn_tank, vn_signal}
+## @end deftypefn
+
+function net = vn_feed (net, name, tank, varargin)
+  if (nargin < 3)
+    print_usage ();
+  endif
+  fn = "vn_feed";
+  label = build_check_name (fn, net, "feed", name);
+  if (ischar (tank) && strcmp (tank, name))
+    build_error (fn, label, "TANK names the feed itself; give a declared tank");
+  endif
+  build_check_ref (fn, label, net, "TANK", tank, {"tank"});
+  spec = [{"flow", "real", "m3/s", []}; build_material_spec(net)];
+  par = build_options (fn, label, varargin, spec);
+  build_check_thermal (fn, label, net, par, {"temperature"});
+  [par, aux] = build_split_species (net, par, struct ());
+  net = build_add_unit (net, name, "feed", "", tank, par, [], aux);
+endfunction
+
+%!test
+%! net = vn_tank (vn_network (), "T1", "area", 2);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.02);
+%! net = vn_feed (net, "D1", "T1", "flow", -0.005);
+%! u = net.units(2);
+%! assert ({u.name, u.kind, u.from, u.to}, {"F1", "feed", "", "T1"});
+%! assert (u.par.flow, 0.02);
+%! assert (net.units(3).par.flow, -0.005);
+%! assert ([net.index.T1, net.index.F1, net.index.D1], [1 2 3]);
+
+%!test
+%! net = vn_network ("w", "thermal", true, "species", {"chlorine"});
+%! net = vn_tank (net, "T1", "area", 4, "level", 2, "temperature", 12);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01, "temperature", 9, "chlorine", 1.8);
+%! assert (net.units(2).par, struct ("flow", 0.01, "temperature", 9));
+%! assert (net.units(2).aux.species.chlorine, 1.8);
+
+%!error <Invalid call> vn_feed (vn_network (), "F1")
+%!error <vn_feed: feed "F1": TANK names unit "T1", which network "network" does not hold> vn_feed (vn_network (), "F1", "T1", "flow", 1)
+%!error <vn_feed: feed "F1": TANK "river" is a boundary; it must be a tank> vn_feed (vn_boundary (vn_network (), "river", "head", 2), "F1", "river", "flow", 1)
+%!error <vn_feed: feed "F1": FLOW must be a finite real scalar \(m3/s\), got NaN> vn_feed (vn_tank (vn_network (), "T1", "area", 1), "F1", "T1", "flow", NaN)
+%!error <vn_feed: feed "F1": TANK must be the name of a declared tank, got 3> vn_feed (vn_network (), "F1", 3)
+%!error <vn_feed: feed "F1": TANK names the feed itself> vn_feed (vn_network (), "F1", "F1")
+%!error <vn_feed: feed "F1": TEMPERATURE given \(9\) but network "network" is not thermal> vn_feed (vn_tank (vn_network (), "T1", "area", 1), "F1", "T1", "temperature", 9)
+%!error <vn_feed: feed "F1": TANK "F0" is a feed; it must be a tank> vn_feed (vn_feed (vn_tank (vn_network (), "T1", "area", 1), "F0", "T1"), "F1", "F0")
