@@ -28,6 +28,11 @@ typedef struct sim {
   int nsw;
   int *sw;          /* unit index of each switch */
   double *scratch;  /* nx, for root evaluations */
+  const vn_sens *sens;
+  N_Vector *yS;
+  double tcache;    /* (t, y) of the Jacobian triplets in net->jx/jp */
+  double *ycache;
+  int cached;
 } sim;
 
 /* Root functions: one per switch, crossing upwards when it must act. */
@@ -138,6 +143,83 @@ static int cv_jac_klu (sunrealtype t, N_Vector y, N_Vector fy, SUNMatrix J,
                      (long *) ri, v) ? 1 : 0;
 }
 
+/* Forward sensitivity right-hand side: dS/dt = J S + df/dp, from the
+ * same analytic triplets as the Jacobian, evaluated once per (t, y). */
+static int cv_sens (int ns, sunrealtype t, N_Vector y, N_Vector ydot,
+                    int is, N_Vector yS, N_Vector ySdot, void *ud,
+                    N_Vector tmp1, N_Vector tmp2)
+{
+  (void) ns; (void) ydot; (void) tmp1; (void) tmp2;
+  sim *S = ud;
+  vn_net *net = S->net;
+  const double *x = N_VGetArrayPointer (y);
+  if (!S->cached || t != S->tcache
+      || memcmp (x, S->ycache, (size_t) net->nx * sizeof *x) != 0)
+    {
+      vn_apply_signals (net, t);
+      if (vn_eval (net, t, x, S->scratch, NULL, 1, 1, 0, 0))
+        return 1;
+      memcpy (S->ycache, x, (size_t) net->nx * sizeof *x);
+      S->tcache = t;
+      S->cached = 1;
+    }
+  const double *s = N_VGetArrayPointer (yS);
+  double *sd = N_VGetArrayPointer (ySdot);
+  memset (sd, 0, (size_t) net->nx * sizeof *sd);
+  for (long k = 0; k < net->jx.n; k++)
+    sd[net->jx.r[k]] += net->jx.v[k] * s[net->jx.c[k]];
+  int pc = S->sens->pidx[is];
+  for (long k = 0; k < net->jp.n; k++)
+    if (net->jp.c[k] == pc)
+      sd[net->jp.r[k]] += net->jp.v[k];
+  return 0;
+}
+
+/* Output sensitivities at one output time: dY/dp = C S + D. */
+static void store_sens (sim *S, int k, int nt, double t, const double *x)
+{
+  vn_net *net = S->net;
+  const vn_sens *q = S->sens;
+  vn_apply_signals (net, t);
+  vn_eval (net, t, x, S->scratch, NULL, 0, 0, 1, 1);
+  S->cached = 0;
+  for (int i = 0; i < q->np; i++)
+    {
+      const double *s = N_VGetArrayPointer (S->yS[i]);
+      for (int j = 0; j < q->ny; j++)
+        q->YS[k + (long) nt * (j + (long) q->ny * i)] = 0;
+      for (long m = 0; m < net->yx.n; m++)
+        {
+          int row = q->yrow[net->yx.r[m]];
+          if (row >= 0)
+            q->YS[k + (long) nt * (row + (long) q->ny * i)]
+              += net->yx.v[m] * s[net->yx.c[m]];
+        }
+      for (long m = 0; m < net->yp.n; m++)
+        {
+          int row = q->yrow[net->yp.r[m]];
+          if (row >= 0 && net->yp.c[m] == q->pidx[i])
+            q->YS[k + (long) nt * (row + (long) q->ny * i)]
+              += net->yp.v[m];
+        }
+    }
+}
+
+/* Restart after a breakpoint or a switch; sensitivities carry on. */
+static int restart (sim *S, void *mem, double t, N_Vector y)
+{
+  int flag = CVodeReInit (mem, t, y);
+  if (flag == CV_SUCCESS && S->yS)
+    {
+      double tr;
+      flag = CVodeGetSens (mem, &tr, S->yS);
+      if (flag == CV_SUCCESS)
+        flag = CVodeSensReInit (mem, CV_STAGGERED, S->yS);
+    }
+  S->cached = 0;
+  return flag;
+}
+
 static double now (void)
 {
   struct timespec ts;
@@ -199,6 +281,14 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
                  double *X, double *Y, const vn_sim_opts *o,
                  vn_sim_stats *stats)
 {
+  return vn_simulate_sens (net, x0, nt, tout, X, Y, o, stats, NULL);
+}
+
+int vn_simulate_sens (vn_net *net, const double *x0, int nt,
+                      const double *tout, double *X, double *Y,
+                      const vn_sim_opts *o, vn_sim_stats *stats,
+                      vn_sens *sens)
+{
   vn_sim_opts opt = {0};
   if (o)
     opt = *o;
@@ -230,7 +320,40 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
   if (st)
     return st;
 
-  sim S = {net, 0, 0, 0, NULL, NULL};
+  sim S = {net, 0, 0, 0, NULL, NULL, sens, NULL, 0, NULL, 0};
+  if (sens)
+    {
+      for (int i = 0; i < sens->np; i++)
+        if (sens->pidx[i] < 0 || sens->pidx[i] >= net->np)
+          {
+            free (bp);
+            return vn_fail (net, VN_EARG, "simulate: sensitivity parameter "
+                            "%d has index %d outside the network", i + 1,
+                            sens->pidx[i]);
+          }
+      sens->yrow = malloc ((size_t) (net->ny + 1) * sizeof *sens->yrow);
+      S.ycache = malloc ((size_t) net->nx * sizeof *S.ycache);
+      if (!sens->yrow || !S.ycache)
+        {
+          free (bp);
+          free (S.ycache);
+          return VN_ENOMEM;
+        }
+      for (int j = 0; j < net->ny; j++)
+        sens->yrow[j] = -1;
+      for (int j = 0; j < sens->ny; j++)
+        {
+          if (sens->yout[j] < 0 || sens->yout[j] >= net->ny)
+            {
+              free (bp);
+              free (S.ycache);
+              return vn_fail (net, VN_EARG, "simulate: sensitivity output "
+                              "%d has index %d outside the network", j + 1,
+                              sens->yout[j]);
+            }
+          sens->yrow[sens->yout[j]] = j;
+        }
+    }
   net->nev = 0;
   for (int i = 0; i < net->nu; i++)
     S.nsw += net->u[i].k == &vn_kind_switch;
@@ -331,6 +454,30 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
       goto done;
     }
 
+  if (sens && sens->np > 0)
+    {
+      S.yS = N_VCloneVectorArray (sens->np, y);
+      if (!S.yS)
+        {
+          st = vn_fail (net, VN_ENOMEM, "simulate: cannot allocate the "
+                        "sensitivities");
+          goto done;
+        }
+      for (int i = 0; i < sens->np; i++)
+        memcpy (N_VGetArrayPointer (S.yS[i]), sens->x0 + (long) net->nx * i,
+                (size_t) net->nx * sizeof (double));
+      if ((flag = CVodeSensInit1 (mem, sens->np, CV_STAGGERED, cv_sens, S.yS))
+          != CV_SUCCESS
+          || (flag = CVodeSensEEtolerances (mem)) != CV_SUCCESS
+          || (flag = CVodeSetSensErrCon (mem, SUNTRUE)) != CV_SUCCESS)
+        {
+          st = vn_fail (net, VN_ESOLVER, "simulate: setting up the "
+                        "sensitivities failed (%s)",
+                        CVodeGetReturnFlagName (flag));
+          goto done;
+        }
+      store_sens (&S, 0, nt, tout[0], x0);
+    }
   double t0w = now ();
   double t = tout[0];
   int k = 1, b = 0;
@@ -359,7 +506,7 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
               /* a switch acts: log it and restart from here */
               if ((st = switch_at_root (&S, mem, tr, N_VGetArrayPointer (y))))
                 goto stats;
-              if ((flag = CVodeReInit (mem, tr, y)) != CV_SUCCESS)
+              if ((flag = restart (&S, mem, tr, y)) != CV_SUCCESS)
                 {
                   st = vn_fail (net, VN_ESOLVER, "simulate: restart after "
                                 "a switch at t = %g failed (%s)", tr,
@@ -373,6 +520,17 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
           if (tout[k] >= seg && b < nbp)
             net->seg_end = INFINITY;
           store (net, k, nt, tout[k], N_VGetArrayPointer (y), X, Y);
+          if (S.yS)
+            {
+              double ts;
+              if (CVodeGetSens (mem, &ts, S.yS) != CV_SUCCESS)
+                {
+                  st = vn_fail (net, VN_ESOLVER, "simulate: reading the "
+                                "sensitivities at t = %g failed", tr);
+                  goto stats;
+                }
+              store_sens (&S, k, nt, tout[k], N_VGetArrayPointer (y));
+            }
           net->seg_end = seg;
           k++;
         }
@@ -398,7 +556,7 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
                   if ((st = switch_at_root (&S, mem, tr,
                                             N_VGetArrayPointer (y))))
                     goto stats;
-                  if (CVodeReInit (mem, tr, y) != CV_SUCCESS)
+                  if (restart (&S, mem, tr, y) != CV_SUCCESS)
                     {
                       st = vn_fail (net, VN_ESOLVER, "simulate: restart "
                                     "after a switch at t = %g failed", tr);
@@ -410,7 +568,7 @@ int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
           /* restart past the breakpoint: the inputs may jump here */
           b++;
           net->seg_end = b < nbp ? bp[b] : tout[nt - 1];
-          if ((flag = CVodeReInit (mem, seg, y)) != CV_SUCCESS)
+          if ((flag = restart (&S, mem, seg, y)) != CV_SUCCESS)
             {
               st = vn_fail (net, VN_ESOLVER, "simulate: restart at t = %g "
                             "failed (%s)", seg, CVodeGetReturnFlagName (flag));
@@ -448,6 +606,14 @@ done:
   if (ctx)
     SUNContext_Free (&ctx);
   free (bp);
+  if (S.yS)
+    N_VDestroyVectorArray (S.yS, sens->np);
+  if (sens)
+    {
+      free (sens->yrow);
+      sens->yrow = NULL;
+    }
+  free (S.ycache);
   free (S.sw);
   free (S.scratch);
   return st;

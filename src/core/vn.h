@@ -169,6 +169,24 @@ typedef struct vn_steady_info {
 int vn_steady (vn_net *net, double *x, const vn_steady_opts *opts,
                vn_steady_info *info);
 
+/* Forward sensitivities of chosen outputs to chosen parameters (CVODES,
+ * analytic df/dx and df/dp): YS is nt x ny x np, column-major, time
+ * running fastest; x0 (nx x np) is the initial state's sensitivity. */
+typedef struct vn_sens {
+  int np;
+  const int *pidx;     /* parameter indices */
+  const double *x0;    /* nx x np */
+  int ny;
+  const int *yout;     /* output indices */
+  double *YS;          /* out: nt x ny x np */
+  int *yrow;           /* internal */
+} vn_sens;
+
+int vn_simulate_sens (vn_net *net, const double *x0, int nt,
+                      const double *tout, double *X, double *Y,
+                      const vn_sim_opts *opts, vn_sim_stats *stats,
+                      vn_sens *sens);
+
 /* Switching log of the last simulation: time, unit, new output. */
 long vn_nevents (const vn_net *net);
 int vn_event_get (const vn_net *net, long i, double *t, int *unit,

@@ -1,5 +1,6 @@
 // [X, Y, stats, states, events] = __vn_simulate__ (pk, sig, tout, x0, opts)
-// events: one row per switching [t, unit (1-based), new output].
+// events: one row per switching [t, unit (1-based), new output];
+// YS: output sensitivities (nt x nout x np) when opts.sens is given.
 // Integrate a packed network; x0 empty = from the declared levels.
 #include "vn_gateway.h"
 
@@ -45,8 +46,38 @@ DEFUN_DLD (__vn_simulate__, args, ,
   int nt = tout.numel ();
   Matrix X (nt, nx), Y (nt, ny);
   vn_sim_stats stats;
-  int st = vn_simulate (net, x0.data (), nt, tout.data (), X.fortran_vec (),
-                        Y.fortran_vec (), &so, &stats);
+  // forward sensitivities, when asked: opts.sens (0-based parameter
+  // indices), opts.sens_x0 (nx x np), opts.sens_yout (0-based outputs)
+  vn_sens sens = {};
+  std::vector<int> spidx, syout;
+  Matrix sx0;
+  NDArray YS;
+  bool want_sens = o.isfield ("sens") && ! o.contents ("sens").isempty ();
+  if (want_sens)
+    {
+      int32NDArray pp = o.contents ("sens").int32_array_value ();
+      int32NDArray yy = o.contents ("sens_yout").int32_array_value ();
+      sx0 = o.contents ("sens_x0").matrix_value ();
+      int np = pp.numel (), nyo = yy.numel ();
+      if (sx0.rows () != nx || sx0.columns () != np)
+        error ("%s: initial sensitivities must be %d x %d", FN, nx, np);
+      spidx.resize (np);
+      syout.resize (nyo);
+      for (int i = 0; i < np; i++)
+        spidx[i] = pp(i).value ();
+      for (int i = 0; i < nyo; i++)
+        syout[i] = yy(i).value ();
+      YS.resize (dim_vector (nt, nyo, np));
+      sens.np = np;
+      sens.pidx = spidx.data ();
+      sens.x0 = sx0.data ();
+      sens.ny = nyo;
+      sens.yout = syout.data ();
+      sens.YS = YS.fortran_vec ();
+    }
+  int st = vn_simulate_sens (net, x0.data (), nt, tout.data (),
+                             X.fortran_vec (), Y.fortran_vec (), &so, &stats,
+                             want_sens ? &sens : NULL);
   octave_scalar_map sm;
   sm.assign ("steps", (double) stats.steps);
   sm.assign ("rhs", (double) stats.rhs);
@@ -74,5 +105,5 @@ DEFUN_DLD (__vn_simulate__, args, ,
       ev(i, 1) = u + 1;
       ev(i, 2) = v;
     }
-  return ovl (X, Y, sm, names, ev);
+  return ovl (X, Y, sm, names, ev, YS);
 }
