@@ -13,7 +13,7 @@
 ## @item "rim"       scalar > 0, Inf allowed
 ## @item "fraction"  scalar in [0, 1]
 ## @item "cd"        scalar in (0, 1]
-## @item "above1"    finite scalar > 1
+## @item "above1"    finite scalar greater than 1
 ## @item "count2"    0, 1 or 2
 ## @item "choice"    one of the strings in extra@{2@}; the code (0-based
 ##                   position) goes to par.(extra@{1@})
@@ -107,7 +107,7 @@ function [ok, what] = check_value (v, type, extra)
       what = "a scalar in (0, 1]";
       ok = num && v > 0 && v <= 1;
     case "above1"
-      what = "a finite scalar > 1";
+      what = "a finite scalar greater than 1";
       ok = num && isfinite (v) && v > 1;
     case "count2"
       what = "0, 1 or 2";
