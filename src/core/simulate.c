@@ -514,6 +514,14 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
                   goto stats;
                 }
               stats->restarts++;
+              /* a root on an output time: that output is this state */
+              if (tout[k] <= tr)
+                {
+                  store (net, k, nt, tout[k], N_VGetArrayPointer (y), X, Y);
+                  if (S.yS)
+                    store_sens (&S, k, nt, tout[k], N_VGetArrayPointer (y));
+                  k++;
+                }
               continue;
             }
           /* outputs at a breakpoint take the input after it */
