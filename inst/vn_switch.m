@@ -33,7 +33,6 @@ function net = vn_switch (net, name, varargin)
              "%s: switch \"%s\": %s is required", fn, name, upper (req{1}));
     endif
   endfor
-  aux = loop_refs (net, name, o, fn);
   par.on = loop_scalar (o.on, "on", name, fn, false);
   par.off = loop_scalar (o.off, "off", name, fn, false);
   if (par.on == par.off)
@@ -41,6 +40,7 @@ function net = vn_switch (net, name, varargin)
            "%s: switch \"%s\": ON and OFF set points are equal (%g); the dead band needs on != off",
            fn, name, par.on);
   endif
+  aux = loop_refs (net, name, o, fn);
   if (isfield (o, "values"))
     v = o.values;
     if (! (isnumeric (v) && isreal (v) && numel (v) == 2 && all (isfinite (v))))
