@@ -168,8 +168,8 @@ function inp = inputs (U)
     if (isfield (U(i).par, p))
       val = strtrim (sprintf ("%g %s", U(i).par.(p), unit_of (U(i).kind, p)));
     elseif (! isnan (table{k,3}))
-      val = strtrim (sprintf ("%g %s (default)", table{k,3},
-                              unit_of (U(i).kind, p)));
+      val = [strtrim(sprintf ("%g %s", table{k,3}, unit_of (U(i).kind, p))), ...
+             " (default)"];
     else
       val = "(not set)";
     endif
