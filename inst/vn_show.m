@@ -228,7 +228,7 @@ endfunction
 %! s = vn_show (net);
 %! assert (! isempty (strfind (s, "thermal yes")));
 %! assert (! isempty (strfind (s, "species: chlorine (decay 2e-05 1/s)")));
-%! assert (! isempty (strfind (s, "shape cone, diameter 8 m, height 12 m, ua 60 W/K, temperature 12 degC, chlorine 1.2")));
+%! assert (! isempty (strfind (s, "shape cone, diameter 8 m, height 12 m, temperature 12 degC, ua 60 W/K, chlorine 1.2")));
 %! assert (isempty (strfind (s, "inputs:")));
 
 %!test
