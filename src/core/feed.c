@@ -45,18 +45,7 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
   return F * g;
 }
 
-static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
-                     const double *x, double *y, vn_lf *dy)
-{
-  (void) net;
-  (void) nd;
-  (void) x;
-  y[0] = u->q;
-  if (dy)
-    vn_lf_axpy (&dy[0], 1, &u->dq);
-}
-
 const vn_kind vn_kind_feed = {
   "feed", VN_ROLE_LINK, NPAR, par, 1, out, ounit,
-  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, outputs
+  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, vn_link_flow_output
 };

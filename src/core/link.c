@@ -123,3 +123,15 @@ int vn_link_check_ends (vn_net *net, vn_unit *u)
                          d >= 0 ? net->u[d].name : "");
   return VN_OK;
 }
+
+/* The output of an element whose only output is its flow. */
+void vn_link_flow_output (vn_net *net, vn_unit *u, const vn_node *nd,
+                          const double *x, double *y, vn_lf *dy)
+{
+  (void) net;
+  (void) nd;
+  (void) x;
+  y[0] = u->q;
+  if (dy)
+    vn_lf_axpy (&dy[0], 1, &u->dq);
+}

@@ -277,6 +277,52 @@ static void store (vn_net *net, int k, int nt, double t, const double *x,
     }
 }
 
+/* One call of CVode toward `target`: a failure is diagnosed, a switching
+ * root is handled (logged, integrator restarted) and *rooted set. */
+static int advance (sim *S, void *mem, double target, N_Vector y,
+                    double *tr, int *rooted, vn_sim_stats *stats)
+{
+  vn_net *net = S->net;
+  int flag = CVode (mem, target, y, tr, CV_NORMAL);
+  *rooted = 0;
+  if (flag < 0)
+    {
+      stats->t_reached = *tr;
+      if (S->interrupted)
+        return vn_fail (net, VN_EINTR, "simulate: interrupted at t = %.6g s",
+                        *tr);
+      diagnose (net, mem, y, flag, *tr);
+      return VN_ESOLVER;
+    }
+  if (flag != CV_ROOT_RETURN)
+    return VN_OK;
+  *rooted = 1;
+  int st = switch_at_root (S, mem, *tr, N_VGetArrayPointer (y));
+  if (st)
+    return st;
+  if ((flag = restart (S, mem, *tr, y)) != CV_SUCCESS)
+    return vn_fail (net, VN_ESOLVER, "simulate: restart after a switch at "
+                    "t = %g failed (%s)", *tr, CVodeGetReturnFlagName (flag));
+  stats->restarts++;
+  return VN_OK;
+}
+
+/* Store output k (and its sensitivities: read from CVODES unless they
+ * were just restarted from the current values). */
+static int output_at (sim *S, void *mem, int k, int nt, double t, N_Vector y,
+                      double *X, double *Y, int read_sens)
+{
+  store (S->net, k, nt, t, N_VGetArrayPointer (y), X, Y);
+  if (!S->yS)
+    return VN_OK;
+  double ts;
+  if (read_sens && CVodeGetSens (mem, &ts, S->yS) != CV_SUCCESS)
+    return vn_fail (S->net, VN_ESOLVER, "simulate: reading the "
+                    "sensitivities at t = %g failed", t);
+  store_sens (S, k, nt, t, N_VGetArrayPointer (y));
+  return VN_OK;
+}
+
 int vn_simulate (vn_net *net, const double *x0, int nt, const double *tout,
                  double *X, double *Y, const vn_sim_opts *o,
                  vn_sim_stats *stats)
@@ -480,7 +526,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
     }
   double t0w = now ();
   double t = tout[0];
-  int k = 1, b = 0;
+  int k = 1, b = 0, rooted;
   while (k < nt)
     {
       double seg = b < nbp ? bp[b] : tout[nt - 1];
@@ -488,91 +534,25 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       CVodeSetStopTime (mem, seg);
       while (k < nt && tout[k] <= seg)
         {
-          double tr;
-          flag = CVode (mem, tout[k], y, &tr, CV_NORMAL);
-          if (flag < 0)
-            {
-              if (S.interrupted)
-                st = vn_fail (net, VN_EINTR, "simulate: interrupted at t = "
-                              "%.6g s", tr);
-              else
-                diagnose (net, mem, y, flag, tr), st = VN_ESOLVER;
-              stats->t_reached = tr;
-              goto stats;
-            }
-          t = tr;
-          if (flag == CV_ROOT_RETURN)
-            {
-              /* a switch acts: log it and restart from here */
-              if ((st = switch_at_root (&S, mem, tr, N_VGetArrayPointer (y))))
-                goto stats;
-              if ((flag = restart (&S, mem, tr, y)) != CV_SUCCESS)
-                {
-                  st = vn_fail (net, VN_ESOLVER, "simulate: restart after "
-                                "a switch at t = %g failed (%s)", tr,
-                                CVodeGetReturnFlagName (flag));
-                  goto stats;
-                }
-              stats->restarts++;
-              /* a root on an output time: that output is this state */
-              if (tout[k] <= tr)
-                {
-                  store (net, k, nt, tout[k], N_VGetArrayPointer (y), X, Y);
-                  if (S.yS)
-                    store_sens (&S, k, nt, tout[k], N_VGetArrayPointer (y));
-                  k++;
-                }
-              continue;
-            }
+          if ((st = advance (&S, mem, tout[k], y, &t, &rooted, stats)))
+            goto stats;
+          /* a root short of the output time: go on; on it: store it */
+          if (rooted && tout[k] > t)
+            continue;
           /* outputs at a breakpoint take the input after it */
-          if (tout[k] >= seg && b < nbp)
+          if (!rooted && tout[k] >= seg && b < nbp)
             net->seg_end = INFINITY;
-          store (net, k, nt, tout[k], N_VGetArrayPointer (y), X, Y);
-          if (S.yS)
-            {
-              double ts;
-              if (CVodeGetSens (mem, &ts, S.yS) != CV_SUCCESS)
-                {
-                  st = vn_fail (net, VN_ESOLVER, "simulate: reading the "
-                                "sensitivities at t = %g failed", tr);
-                  goto stats;
-                }
-              store_sens (&S, k, nt, tout[k], N_VGetArrayPointer (y));
-            }
+          st = output_at (&S, mem, k, nt, tout[k], y, X, Y, !rooted);
           net->seg_end = seg;
+          if (st)
+            goto stats;
           k++;
         }
       if (b < nbp)
         {
           while (t < seg)
-            {
-              double tr;
-              flag = CVode (mem, seg, y, &tr, CV_NORMAL);
-              if (flag < 0)
-                {
-                  if (S.interrupted)
-                    st = vn_fail (net, VN_EINTR, "simulate: interrupted at "
-                                  "t = %.6g s", tr);
-                  else
-                    diagnose (net, mem, y, flag, tr), st = VN_ESOLVER;
-                  stats->t_reached = tr;
-                  goto stats;
-                }
-              t = tr;
-              if (flag == CV_ROOT_RETURN)
-                {
-                  if ((st = switch_at_root (&S, mem, tr,
-                                            N_VGetArrayPointer (y))))
-                    goto stats;
-                  if (restart (&S, mem, tr, y) != CV_SUCCESS)
-                    {
-                      st = vn_fail (net, VN_ESOLVER, "simulate: restart "
-                                    "after a switch at t = %g failed", tr);
-                      goto stats;
-                    }
-                  stats->restarts++;
-                }
-            }
+            if ((st = advance (&S, mem, seg, y, &t, &rooted, stats)))
+              goto stats;
           /* restart past the breakpoint: the inputs may jump here */
           b++;
           net->seg_end = b < nbp ? bp[b] : tout[nt - 1];

@@ -123,7 +123,8 @@ static double maxscaled (const ss *S, const double *F, int *where)
 }
 
 /* Solve J dz = -F at z, dense. */
-static int solve_dense (ss *S, const double *z, const double *F, double *dz)
+static int solve_dense (ss *S, const double *z, const double *F, double *dz,
+                        double sigma)
 {
   vn_net *net = S->net;
   int nx = S->nx, m = S->m, n = S->n;
@@ -154,6 +155,8 @@ static int solve_dense (ss *S, const double *z, const double *F, double *dz)
     }
   if (st)
     return st;
+  for (int i = 0; i < nx; i++)
+    S->J[(long) i * n + i] -= sigma;
   for (int i = 0; i < n; i++)
     dz[i] = -F[i];
   int one = 1, info = 0;
@@ -166,7 +169,8 @@ static int solve_dense (ss *S, const double *z, const double *F, double *dz)
 
 /* Solve J dz = -F at z with KLU on the compressed-column Jacobian, the
  * output rows and adjusted-input columns appended. */
-static int solve_klu (ss *S, const double *z, const double *F, double *dz)
+static int solve_klu (ss *S, const double *z, const double *F, double *dz,
+                      double sigma)
 {
   vn_net *net = S->net;
   int nx = S->nx, m = S->m, n = S->n;
@@ -175,6 +179,11 @@ static int solve_klu (ss *S, const double *z, const double *F, double *dz)
   int st = vn_jac_csc (net, 0, z, &nnz, S->cp, S->ri, S->v);
   if (st)
     return st;
+  /* the pattern always holds the diagonal */
+  for (int j = 0; j < nx && sigma != 0; j++)
+    for (long q = S->cp[j]; q < S->cp[j + 1]; q++)
+      if (S->ri[q] == j)
+        S->v[q] -= sigma;
   const double *J;
   const long *cp, *ri;
   if (m == 0)
@@ -263,6 +272,63 @@ static void project (const ss *S, double *z)
     }
 }
 
+static int solve (ss *S, const double *z, const double *F, double *dz,
+                  double sigma)
+{
+  return S->solver == VN_SOLVER_KLU ? solve_klu (S, z, F, dz, sigma)
+                                    : solve_dense (S, z, F, dz, sigma);
+}
+
+/* Pseudo-transient continuation: implicit Euler steps on the balances
+ * with a step dt that grows as the residual falls (switched evolution
+ * relaxation; Kelley and Keyes, SIAM J. Numer. Anal. 35 (1998)), so the
+ * iterate follows the plant's own settling and becomes Newton's method
+ * near the answer.  Used when plain Newton stalls far from it. */
+static int ptc (ss *S, double dt)
+{
+  vn_net *net = S->net;
+  int n = S->n, where;
+  int st = residual (S, S->z, S->F);
+  if (st)
+    return st;
+  double nrm = sqrt (2 * merit (S, S->F));
+  for (int it = 0; it < 10 * S->maxiter; it++)
+    {
+      if (maxscaled (S, S->F, &where) <= S->tol)
+        return VN_OK;
+      if (net->stop && net->stop (net->stop_data))
+        return vn_fail (net, VN_EINTR, "steady: interrupted");
+      st = solve (S, S->z, S->F, S->dz, 1 / dt);
+      S->iters++;
+      if (st == VN_OK)
+        {
+          for (int i = 0; i < n; i++)
+            S->zt[i] = S->z[i] + S->dz[i];
+          project (S, S->zt);
+          st = residual (S, S->zt, S->Ft);
+        }
+      if (st == VN_ENOMEM || st == VN_EINTR)
+        return st;
+      double nt = st == VN_OK ? sqrt (2 * merit (S, S->Ft)) : INFINITY;
+      if (!(nt <= 10 * nrm))
+        {
+          /* too bold: shorter pseudo-time step */
+          dt *= 0.25;
+          if (dt < 1e-12)
+            break;
+          continue;
+        }
+      memcpy (S->z, S->zt, (size_t) n * sizeof *S->z);
+      memcpy (S->F, S->Ft, (size_t) n * sizeof *S->F);
+      /* grow at least geometrically: implicit Euler is stable for any
+       * step, and a residual that falls allows more (SER) */
+      dt *= fmin (fmax (nrm / fmax (nt, 1e-300), 2), 10);
+      nrm = nt;
+    }
+  return vn_fail (net, VN_ESOLVER, "steady: pseudo-transient continuation "
+                  "did not converge");
+}
+
 /* Newton with backtracking from S->z; VN_OK when converged. */
 static int newton (ss *S)
 {
@@ -280,8 +346,7 @@ static int newton (ss *S)
         break;
       if (net->stop && net->stop (net->stop_data))
         return vn_fail (net, VN_EINTR, "steady: interrupted");
-      st = S->solver == VN_SOLVER_KLU ? solve_klu (S, S->z, S->F, S->dz)
-                                      : solve_dense (S, S->z, S->F, S->dz);
+      st = solve (S, S->z, S->F, S->dz, 0);
       if (st)
         return st;
       S->iters++;
@@ -454,11 +519,12 @@ static int check_answer (ss *S)
           if (head - lift <= band)
             return vn_fail (net, VN_ENOSTEADY, "pump \"%s\" cannot deliver: "
                             "it must lift %g m (from \"%s\" at head %g m to "
-                            "%s at %g m) but its shutoff head at speed %g is "
+                            "%s%s%s at %g m) but its shutoff head at speed %g is "
                             "%g m, so no flow passes; raise the speed or "
                             "choose a pump with more head", u->name, lift,
-                            net->u[s].name, hs, nd ? net->u[d].name
-                            : "free discharge", hd, sp, head);
+                            net->u[s].name, hs, nd ? "\"" : "",
+                            nd ? net->u[d].name : "free discharge",
+                            nd ? "\"" : "", hd, sp, head);
         }
     }
   return VN_OK;
@@ -479,7 +545,7 @@ static int diagnose (ss *S, int st, double tsim)
         big = fabs (S->F[i]);
         worst = i;
       }
-  if (worst >= 0 && big > 1e-6 * S->qs)
+  if (worst >= 0 && big > 1e-6 * S->qs && tsim > 0)
     {
       int t = vn_state_unit (net, worst);
       const vn_unit *u = &net->u[t];
@@ -489,7 +555,7 @@ static int diagnose (ss *S, int st, double tsim)
                         "outlets pass%s; no steady state exists at these inputs; "
                         "raise the outlet capacity, lower the inflow or "
                         "give the tank a rim", u->name, net->nd[t].level,
-                        tsim > 0 ? " (reached by simulation)" : "",
+                        " (reached by simulation)",
                         S->F[worst], has_rim (u) ? ""
                         : " and it has no rim to spill over");
       if (net->nd[t].level < 2 * net->smooth)
@@ -502,11 +568,13 @@ static int diagnose (ss *S, int st, double tsim)
   double r = maxscaled (S, S->F, &where);
   if (where >= 0 && where < S->nx)
     {
+      char why[1024];
+      snprintf (why, sizeof why, "%s", net->msg);
       int t = vn_state_unit (net, where);
       return vn_fail (net, VN_ESOLVER, "steady: Newton's method did not "
                       "converge (scaled residual %g, largest in %s.%s); %s",
                       r, net->u[t].name, vn_state_var (net, where),
-                      net->msg);
+                      strncmp (why, "steady: ", 8) ? why : why + 8);
     }
   if (where >= S->nx)
     return vn_fail (net, VN_ENOSTEADY, "the targets cannot be met with the "
@@ -675,8 +743,13 @@ int vn_steady (vn_net *net, double *x, const vn_steady_opts *o,
 
   /* attempt 1 from the start; then simulate 10, 100, 1000 slowest time
    * constants (cumulative) and retry from where the run ended */
+  double tsim = 0, tau = slowest (&S, S.z);
   st = newton (&S);
-  double tsim = 0, tau = 0;
+  if (st == VN_ESOLVER)
+    {
+      memcpy (S.z, z0, (size_t) S.n * sizeof *S.z);
+      st = ptc (&S, 0.1 * tau);
+    }
   for (int a = 0; st != VN_OK && st != VN_EINTR && st != VN_ENOMEM
                   && o->simulate >= 0 && a < 3; a++)
     {
@@ -684,7 +757,6 @@ int vn_steady (vn_net *net, double *x, const vn_steady_opts *o,
         {
           memcpy (S.z, z0, (size_t) S.n * sizeof *S.z);
           set_inputs (&S, S.z);
-          tau = slowest (&S, S.z);
         }
       double span = 10 * tau * pow (10, a);
       double tout[2] = {tsim, tsim + span};
@@ -722,6 +794,11 @@ int vn_steady (vn_net *net, double *x, const vn_steady_opts *o,
       double *zs = z0;     /* keep the simulated state for a diagnosis */
       memcpy (zs, S.z, (size_t) S.n * sizeof *zs);
       st = newton (&S);
+      if (st == VN_ESOLVER)
+        {
+          memcpy (S.z, zs, (size_t) S.n * sizeof *S.z);
+          st = ptc (&S, 0.1 * tau);
+        }
       info->simulated = 1;
       info->t_sim = tsim;
       if (st != VN_OK)

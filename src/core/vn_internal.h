@@ -202,5 +202,7 @@ double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
                      double dh, double outlet, double inlet, int pc_outlet,
                      int pc_inlet, double band, vn_lf *dg);
 int vn_link_check_ends (vn_net *net, vn_unit *u);
+void vn_link_flow_output (vn_net *net, vn_unit *u, const vn_node *nd,
+                          const double *x, double *y, vn_lf *dy);
 
 #endif
