@@ -108,7 +108,7 @@ endfunction
 %! net = vn_network ("c");
 %! net = vn_tank (net, "T1", "area", 2, "level", 1);
 %! net = vn_feed (net, "F1", "T1", "flow", 0.01);
-%! net = vn_valve (net, "LV1", "T1", "", "kv", 60, "opening", 0.5);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 150, "opening", 0.5, "characteristic", "linear");
 %! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
 %!                      "LV1.opening", "setpoint", 1, "gain", 2, ...
 %!                      "reset", 300, "action", "direct", "limits", [0 1]);
