@@ -122,6 +122,12 @@ static int setup_globals (vn_net *net, const vn_spec *s)
           net->decay[i] = k;
         }
     }
+  /* energy and species balances are planned, not built: refuse rather
+   * than carry temperatures the model would not balance */
+  if (net->thermal || net->nspecies > 0)
+    return vn_fail (net, VN_EARG, "network: energy (thermal) and species "
+                    "balances are not available in this version; declare "
+                    "the network without \"thermal\" and \"species\"");
   return VN_OK;
 }
 
