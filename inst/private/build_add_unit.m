@@ -14,8 +14,8 @@ function net = build_add_unit (net, name, kind, from, to, par, table, aux)
   if (isempty (net.units))
     net.units = u;
   else
-    ## Other builders may have made the fields in another order.
-    net.units(end+1) = orderfields (u, net.units(1));
+    ## Indexed assignment matches fields by name, whatever their order.
+    net.units(end+1) = u;
   endif
   net.index.(name) = numel (net.units);
 endfunction

@@ -8,7 +8,9 @@
 ## @end deftypefn
 
 function spec = build_material_spec (net)
+  spec = {"temperature", "real", "degC", []};
   sp = net.options.species(:);
-  spec = [{"temperature", "real", "degC", []};
-          sp, repmat({"nonneg", "concentration", []}, numel (sp), 1)];
+  if (! isempty (sp))
+    spec = [spec; sp, repmat({"nonneg", "concentration", []}, numel (sp), 1)];
+  endif
 endfunction
