@@ -1,0 +1,97 @@
+## -*- texinfo -*-
+## @deftypefn  {} {[@var{t}, @var{h}, @var{stats}, @var{net}] =} chain_vesselnet (@var{N})
+## @deftypefnx {} {[@var{t}, @var{h}, @var{stats}, @var{net}] =} chain_vesselnet (@var{net})
+## Build the N-tank benchmark chain with vesselnet's builders and simulate it.
+##
+## The chain is the one of bench/README.md: tanks @code{T1} @dots{}
+## @code{TN} of area 1 m2 starting at 1 m, feed @code{F} of 0.01 m3/s into
+## @code{T1}, orifices @code{O1} @dots{} @code{ON} of coefficient
+## 0.01 m2.5/s, the last one discharging freely.  The run covers 0 to
+## 3600 s with output every 5 s, relative tolerance 1e-6 and absolute
+## tolerance 1e-8 m3, as in the two baselines.
+##
+## Given a network @var{net} made by an earlier call, it is simulated
+## again without being rebuilt.
+##
+## @var{t} is the 721x1 column of output times (s), @var{h} the 721xN
+## levels (m).  @var{stats} holds the core's counts (@code{steps},
+## @code{rhs}, @code{jac}), @code{wall} (integration time measured inside
+## the core, s), @code{call} (the whole @code{vn_simulate} call including
+## packing and unpacking, s), @code{build} (the builder calls, s; 0 when
+## @var{net} was given) and @code{bytes} (size of the result structure).
+##
+## This is a benchmark case, not a user command.
+## @seealso{chain_ode15s, vn_simulate}
+## @end deftypefn
+
+function [t, h, stats, net] = chain_vesselnet (N)
+
+  if (nargin != 1)
+    print_usage ();
+  endif
+  tbuild = 0;
+  if (isstruct (N))
+    net = N;
+  else
+    if (! (isreal (N) && isscalar (N) && N == fix (N) && N >= 1))
+      error ("Octave:invalid-input-arg",
+             "chain_vesselnet: N (number of tanks) must be an integer >= 1, got %s",
+             mat2str (N));
+    endif
+    t0 = tic ();
+    net = build_chain (N);
+    tbuild = toc (t0);
+  endif
+
+  t0 = tic ();
+  res = vn_simulate (net, [0 3600], "dt", 5, "reltol", 1e-6, "abstol", 1e-8);
+  tcall = toc (t0);
+
+  t = res.t;
+  ## All states are tank volumes of area 1 m2, in tank order.
+  h = res.x;
+  if (rows (h) != numel (t))
+    h = h.';
+  endif
+  info = whos ("res");
+  stats = struct ("steps", res.stats.steps, "rhs", res.stats.rhs,
+                  "jac", res.stats.jac, "wall", res.stats.wall,
+                  "call", tcall, "build", tbuild, "bytes", info.bytes);
+
+endfunction
+
+function net = build_chain (N)
+  net = vn_network ("chain");
+  for i = 1:N
+    net = vn_tank (net, sprintf ("T%d", i), "area", 1.0, "level", 1.0);
+  endfor
+  net = vn_feed (net, "F", "T1", "flow", 0.01);
+  for i = 1:N-1
+    net = vn_orifice (net, sprintf ("O%d", i), sprintf ("T%d", i),
+                      sprintf ("T%d", i+1), "coeff", 0.01);
+  endfor
+  net = vn_orifice (net, sprintf ("O%d", N), sprintf ("T%d", N), "",
+                    "coeff", 0.01);
+endfunction
+
+%!test
+%! ## One tank fed at 0.01 m3/s through c = 0.01 at h = 1 m is at rest
+%! ## (Torricelli orifice law q = c sqrt (h), common practice).
+%! [t, h, stats] = chain_vesselnet (1);
+%! assert (size (h), [721 1]);
+%! assert (t([1 2 end]), [0; 5; 3600]);
+%! assert (h, ones (721, 1), 1e-6);
+%! assert (stats.build > 0);
+
+%!test
+%! ## Two tanks approach h = [2 1] m; chain_floor 2 gives [1.99933 0.99959]
+%! ## after 3600 s (bench/README.md).
+%! [~, h, stats, net] = chain_vesselnet (2);
+%! assert (h(end,:), [1.99933 0.99959], 2e-5);
+%! assert (stats.steps > 10);
+%! [~, h2, stats2] = chain_vesselnet (net);
+%! assert (h2, h);
+%! assert (stats2.build, 0);
+
+%!error <N \(number of tanks\)> chain_vesselnet (0)
+%!error chain_vesselnet ()
