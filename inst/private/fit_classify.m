@@ -1,0 +1,119 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{E} =} fit_classify (@var{net}, @var{ex}, @var{pq})
+## Resolve the quantities of each experiment against the network for
+## vn_fit: inputs (input parameters of their unit) become signals, the
+## rest must be outputs of their unit.  @var{pq} are the fitted
+## parameters (from vn_quantity); fitting an input that a test drives is
+## refused.  Returns one struct per experiment.
+## @end deftypefn
+
+function E = fit_classify (net, ex, pq)
+  s = vn_schema ();
+  E = struct ("t", {}, "name", {}, "u", {}, "u0", {}, "yname", {},
+              "yidx", {}, "y", {}, "w", {}, "start", {}, "levels", {});
+  for k = 1:numel (ex)
+    x = ex(k);
+    who = sprintf ("vn_fit: experiment %d", k);
+    if (! isempty (x.name))
+      who = sprintf ("%s (\"%s\")", who, x.name);
+    endif
+    u = struct ("quantity", {}, "t", {}, "v", {}, "hold", {}, "kind", {});
+    u0 = {};
+    yname = {};
+    yidx = [];
+    ycol = [];
+    for j = 1:numel (x.names)
+      name = x.names{j};
+      q = fit_quantity (net, s, name, who);
+      col = x.data(:, j);
+      if (q.isinput)
+        if (any (isnan (col)))
+          error ("Octave:invalid-input-arg",
+                 "%s: input \"%s\" holds %d NaN sample(s); an input must be known at every time",
+                 who, name, sum (isnan (col)));
+        endif
+        for i = 1:numel (pq)
+          if (strcmp (pq{i}.name, name))
+            error ("Octave:invalid-input-arg",
+                   "%s: \"%s\" drives the test, so it cannot also be fitted",
+                   who, name);
+          endif
+        endfor
+        [tt, vv] = fit_breakpoints (x.t, col, x.hold);
+        u(end+1) = struct ("quantity", name, "t", tt, "v", vv,
+                           "hold", x.hold, "kind", "table");
+        u0(end+1, :) = {q.unit, q.var, col(1)};
+      else
+        yname{end+1} = name;
+        yidx(end+1) = q.index;
+        ycol(end+1) = j;
+      endif
+    endfor
+    ny = numel (yname);
+    if (ny == 0)
+      error ("Octave:invalid-input-arg",
+             "%s has no measured output; its quantities %s are all inputs",
+             who, strjoin (x.names, ", "));
+    endif
+    w = ones (1, ny);
+    if (! isempty (x.sigma))
+      w = expand (x.sigma, ny, "sigma", who);
+      w = 1 ./ w;
+    elseif (! isempty (x.weights))
+      w = sqrt (expand (x.weights, ny, "weights", who));
+    endif
+    levels = zeros (0, 2);
+    if (strcmp (x.start, "measured"))
+      for j = 1:ny
+        dot = find (yname{j} == ".", 1);
+        un = yname{j}(1:dot-1);
+        ui = net.index.(un);
+        v = x.data(1, ycol(j));
+        if (strcmp (yname{j}(dot+1:end), "level")
+            && strcmp (net.units(ui).kind, "tank") && ! isnan (v))
+          levels(end+1, :) = [ui, v];
+        endif
+      endfor
+    endif
+    E(k) = struct ("t", x.t, "name", x.name, "u", u, "u0", {u0},
+                   "yname", {yname}, "yidx", int32 (yidx),
+                   "y", x.data(:, ycol), "w", w, "start", x.start,
+                   "levels", levels);
+  endfor
+endfunction
+
+## Role of a quantity: an input parameter of its unit, else an output.
+function q = fit_quantity (net, s, name, who)
+  dot = find (name == ".", 1);
+  un = name(1:dot-1);
+  var = name(dot+1:end);
+  if (! isfield (net.index, un))
+    error ("Octave:invalid-input-arg",
+           "%s: quantity \"%s\": the network has no unit \"%s\"", who, name, un);
+  endif
+  ui = net.index.(un);
+  k = s.(net.units(ui).kind);
+  slot = find (strcmp (k.params, var), 1);
+  if (! isempty (slot) && k.isinput(slot))
+    q = vn_quantity (net, name, "input", who);
+    q.isinput = true;
+  elseif (any (strcmp (k.outputs, var)))
+    q = vn_quantity (net, name, "output", who);
+    q.isinput = false;
+  else
+    error ("Octave:invalid-input-arg",
+           "%s: quantity \"%s\" is neither an input nor an output of %s \"%s\"; inputs: %s; outputs: %s",
+           who, name, net.units(ui).kind, un,
+           strjoin (k.params(k.isinput), ", "), strjoin (k.outputs, ", "));
+  endif
+endfunction
+
+function v = expand (v, ny, what, who)
+  if (isscalar (v))
+    v = repmat (v, 1, ny);
+  elseif (numel (v) != ny)
+    error ("Octave:invalid-input-arg",
+           "%s: \"%s\" has %d value(s) but the test has %d measured output(s)",
+           who, what, numel (v), ny);
+  endif
+endfunction

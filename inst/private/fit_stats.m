@@ -1,0 +1,68 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{st} =} fit_stats (@var{J}, @var{r}, @var{p}, @var{names})
+## Standard errors, 95 % intervals (Student's t) and correlations of a
+## least-squares fit from the Jacobian @var{J} of the weighted residuals
+## with respect to log p.  The covariance is s^2 (J'J)^-1 with s^2 the
+## residual variance, so the sigmas given need only be right relative to
+## each other.  Warns "vesselnet:fit-ill-conditioned", naming the
+## parameters, when J'J is near-singular or two estimates correlate
+## beyond 0.99.
+## @end deftypefn
+
+function st = fit_stats (J, r, p, names)
+  p = p(:);
+  [m, n] = size (J);
+  dof = m - n;
+  H = J' * J;
+  sc = sqrt (diag (H));
+  sc(sc == 0) = 1;
+  Hs = H ./ (sc * sc');
+  rc = rcond (Hs);
+  if (dof > 0)
+    s2 = (r' * r) / dof;
+  else
+    s2 = NaN;
+  endif
+  Cs = pinv (Hs);
+  Cl = s2 * Cs ./ (sc * sc');          # covariance of log p
+  C = Cl .* (p * p');                  # first-order covariance of p
+  se = sqrt (max (diag (C), 0));
+  d = sqrt (max (diag (Cs), realmin));
+  R = Cs ./ (d * d');
+  if (dof > 0)
+    tq = fit_tquantile (0.975, dof);
+  else
+    tq = NaN;
+  endif
+  st.stderr = se;
+  st.ci = [p - tq * se, p + tq * se];
+  st.corr = R;
+  st.cov = C;
+  st.dof = dof;
+  st.tquantile = tq;
+  st.rcond = rc;
+  bad = {};
+  if (rc < 1e-12)
+    weak = find (abs (sc) <= 1e-8 * max (sc) | diag (Hs) == 0);
+    bad{end+1} = sprintf ("the information matrix is near-singular (rcond %.2g)%s",
+                          rc, listed (names, weak));
+  endif
+  [i, j] = find (triu (abs (R) > 0.99, 1));
+  for k = 1:numel (i)
+    bad{end+1} = sprintf ("%s and %s correlate (%.4f)", names{i(k)},
+                          names{j(k)}, R(i(k), j(k)));
+  endfor
+  if (! isempty (bad))
+    warning ("vesselnet:fit-ill-conditioned",
+             "vn_fit: the data cannot tell the parameters apart: %s; fix one of them or add a test that excites it",
+             strjoin (bad, "; "));
+  endif
+endfunction
+
+function s = listed (names, idx)
+  if (isempty (idx))
+    s = sprintf (" among %s", strjoin (names, ", "));
+  else
+    s = sprintf ("; not seen by the data: %s", strjoin (names(idx), ", "));
+  endif
+endfunction
