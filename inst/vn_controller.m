@@ -99,7 +99,13 @@ function net = vn_controller (net, name, varargin)
     par.hi = L(2);
   endif
   if (isfield (o, "antiwindup"))
-    par.antiwindup = double (logical (o.antiwindup));
+    a = o.antiwindup;
+    if (! ((islogical (a) || isnumeric (a)) && isscalar (a) && ! isnan (a)))
+      error ("Octave:invalid-input-arg",
+             "%s: controller \"%s\": ANTIWINDUP must be true or false", fn,
+             name);
+    endif
+    par.antiwindup = double (logical (a));
   endif
   net = loop_append (net, name, "controller", par, aux);
 endfunction
@@ -130,4 +136,5 @@ endfunction
 %!error <no unit "T9"> vn_controller (net, "LC2", "measure", "T9.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 1)
 %!error <GAIN must not be 0> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 0)
 %!error <ACTION> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "action", "sideways")
+%!error <ANTIWINDUP must be true or false> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "antiwindup", "yes")
 %!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
