@@ -14,3 +14,12 @@ function t = fit_tquantile (p, df)
     t = sqrt (df * (1 / x - 1));
   endif
 endfunction
+
+## Student's t table, two-sided 95 % (Fisher and Yates, Statistical
+## Tables, memory): t(0.975, 1) = 12.706, t(0.975, 10) = 2.2281,
+## t(0.975, 30) = 2.0423; the normal limit 1.95996.
+%!assert (fit_tquantile (0.975, 10), 2.2281, 5e-5)
+%!assert (fit_tquantile (0.975, 1), 12.706, 5e-4)
+%!assert (fit_tquantile (0.975, 30), 2.0423, 5e-5)
+%!assert (fit_tquantile (0.975, Inf), 1.95996, 5e-6)
+%!assert (fit_tquantile (0.975, 1e6), 1.95996, 5e-5)

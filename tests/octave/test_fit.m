@@ -139,3 +139,21 @@
 %!error <holds only NaN> vn_experiment (0:2, "F1.flow", [1 1 1], "T1.level", NaN (1, 3))
 %!error <"sigma" has 2 value\(s\) but the test has 1> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:2, "T1.level", [1 1 1], "sigma", [1 2]), {"O1.coeff"})
 %!error <drives the test, so it cannot also be fitted> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:2, "F1.flow", [1 1 1], "T1.level", [1 1 1]), {"F1.flow"})
+
+%!test
+%! ## only T2 measured and one test: O1.coeff and T2.area trade off
+%! ## against each other; the warning names them
+%! e = vn_experiment (ex1.t, "F1.flow", ex1.data(:, 1), "T2.level",
+%!                    ex1.data(:, 3), "hold", true);
+%! lastwarn ("");
+%! est = vn_fit (start, e, names);
+%! [msg, id] = lastwarn ();
+%! assert (id, "vesselnet:fit-ill-conditioned");
+%! assert (! isempty (strfind (msg, "O1.coeff and T2.area")));
+%! assert (abs (est.corr(1, 3)) > 0.99);
+
+%!test
+%! ## an upper bound holds the estimate at the bound
+%! est = vn_fit (start, ex1, names, "upper", [0.0029, 1, 10]);
+%! assert (est.value(1), 0.0029, 1e-12);
+%! assert (est.value(2:3), truth(2:3), -0.1);
