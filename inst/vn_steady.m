@@ -1,0 +1,379 @@
+## -*- texinfo -*-
+## @deftypefn  {} {@var{op} =} vn_steady (@var{net})
+## @deftypefnx {} {@var{op} =} vn_steady (@var{net}, @var{quantity}, @var{value}, @dots{})
+## @deftypefnx {} {@var{op} =} vn_steady (@var{net}, @qcode{"target"}, @{@var{output}, @var{value}, @dots{}@}, @qcode{"adjust"}, @{@var{input}, @dots{}@})
+## @deftypefnx {} {@var{op} =} vn_steady (@dots{}, @var{option}, @var{value}, @dots{})
+## Find the steady state (operating point) of a network.
+##
+## With no further arguments the inputs keep their declared values (feed
+## flows, valve openings, pump speeds, boundary heads).  Pairs
+## @var{quantity}, @var{value} such as @code{"F1.flow", 0.025} set inputs
+## to other values first.
+##
+## The inverse problem: @qcode{"target"} names outputs and the values they
+## must hold, @qcode{"adjust"} the inputs left free to achieve that, as
+## many inputs as targets; e.g. the feed that holds a level:
+## @code{vn_steady (net, "target", @{"T2.level", 1.5@}, "adjust",
+## @{"F1.flow"@})}.
+##
+## The search is Newton's method on the volume balances (and the target
+## equations) with the core's analytic Jacobian, a backtracking line
+## search on the residual scaled by the network's flows, dense LU for
+## small networks and KLU for large ones.  It starts from the declared
+## levels (or @qcode{"initial"}); when that fails it simulates over a
+## few of the slowest time constants and starts again from where the run
+## ended.  Iterations are bounded, so the call always returns.
+##
+## When no steady state exists the error (identifier
+## @qcode{"vesselnet:no-steady-state"}) says why in plant terms: a tank
+## with no outlet that keeps filling, a tank whose outlets cannot pass its
+## inflow, a tank that runs dry under a pump or draw-off, a pump that
+## cannot reach the head it works against, targets the inputs cannot
+## meet.  A tank spilling over its rim is a valid steady state.
+##
+## Fields of @var{op}:
+## @table @code
+## @item T1, O1, @dots{}
+## one field per unit with its outputs and inputs as scalars, as in
+## @code{vn_simulate}'s result: @code{op.T1.level}, @code{op.O1.flow},
+## @code{op.F1.flow}; @code{op.units} gives their units of measure.
+## @item x, states
+## the state vector and the states' names.
+## @item input_names, input_values
+## every input quantity (@qcode{"F1.flow"}, @dots{}) and its value at the
+## steady state; @code{inputs} holds the same as @code{inputs.F1.flow}.
+## @item adjusted
+## the inputs found for the targets, @code{adjusted.F1.flow} (an empty
+## struct without targets).
+## @item spilling, spill
+## names of the tanks spilling over their rims and their spill flows
+## (m3/s), in the same order.
+## @item residual, relres
+## largest volume-balance residual (m3/s) and the scaled residual
+## (relative to the network's flows and to the targets).
+## @item iterations, method, solver
+## Newton iterations, @qcode{"newton"} or @qcode{"newton after
+## simulation"}, @qcode{"dense"} or @qcode{"klu"}.
+## @item net
+## the network with the inputs set to their steady values, so that
+## @code{vn_simulate (op.net, tspan, "initial", op)} continues from it.
+## @end table
+##
+## Options:
+## @table @asis
+## @item @qcode{"initial"}
+## start from an operating point (its @code{x}) or a state vector.
+## @item @qcode{"maxiter"}
+## Newton iterations per attempt (default 60).
+## @item @qcode{"tol"}
+## scaled residual accepted as converged (default 1e-10).
+## @item @qcode{"solver"}
+## @qcode{"auto"} (dense up to 100 unknowns, else KLU), @qcode{"dense"}
+## or @qcode{"klu"}.
+## @item @qcode{"simulate"}
+## false: no simulation fallback (default true).
+## @item @qcode{"verbose"}
+## print iterations, method and residual.
+## @end table
+##
+## An operating point is a model's prediction: validate the model against
+## plant data before settings derived from it reach a live plant.
+## @seealso{vn_simulate, vn_linearize, vn_stepresponse}
+## @end deftypefn
+
+function op = vn_steady (net, varargin)
+  if (nargin < 1)
+    print_usage ();
+  endif
+  if (! (isstruct (net) && isfield (net, "type")
+         && strcmp (net.type, "vesselnet.network")))
+    error ("Octave:invalid-input-arg",
+           "vn_steady: NET must be a network made by vn_network");
+  endif
+  [ovr, opt] = parse_args (net, varargin);
+  ## inputs at other values
+  for i = 1:numel (ovr)
+    net.units(ovr(i).q.unit).par.(ovr(i).q.var) = ovr(i).value;
+  endfor
+  [padj, ytgt, tval, qadj] = inverse_problem (net, opt);
+  x0 = start_state (opt.initial);
+  pk = vn_pack (net);
+  so = struct ("maxiter", opt.maxiter, "tol", opt.tol, "solver", opt.solver,
+               "simulate", opt.simulate);
+  [x, y, ua, info, states] = __vn_steady__ (pk, x0, padj, ytgt, tval, so);
+  adjusted = struct ();
+  for k = 1:numel (qadj)
+    net.units(qadj{k}.unit).par.(qadj{k}.var) = ua(k);
+    adjusted.(qadj{k}.uname).(qadj{k}.var) = ua(k);
+  endfor
+  op = operating_point (net, x, y, states);
+  op.adjusted = adjusted;
+  op.residual = info.residual;
+  op.relres = info.relres;
+  op.iterations = info.iterations;
+  if (info.simulated)
+    op.method = "newton after simulation";
+  else
+    op.method = "newton";
+  endif
+  op.solver = info.solver;
+  op.net = net;
+  if (opt.verbose)
+    printf ("vn_steady: %s, %d iterations, residual %.3g m3/s (scaled %.3g), %s\n",
+            op.method, op.iterations, op.residual, op.relres, op.solver);
+  endif
+endfunction
+
+## Name/value pairs: input quantities ("UNIT.VAR") and options.
+function [ovr, opt] = parse_args (net, args)
+  opt = struct ("target", {{}}, "adjust", {{}}, "initial", [],
+                "maxiter", 60, "tol", 1e-10, "solver", 0, "simulate", true,
+                "verbose", false);
+  ovr = struct ("q", {}, "value", {});
+  if (mod (numel (args), 2) != 0)
+    error ("Octave:invalid-input-arg",
+           "vn_steady: arguments after NET come in name/value pairs");
+  endif
+  for i = 1:2:numel (args)
+    name = args{i};
+    val = args{i+1};
+    if (! ischar (name) || ! isrow (name))
+      error ("Octave:invalid-input-arg",
+             "vn_steady: argument %d must be an input quantity \"UNIT.VARIABLE\" or an option name",
+             i + 1);
+    endif
+    if (any (name == "."))
+      q = vn_quantity (net, name, "input", "vn_steady");
+      if (! (isnumeric (val) && isreal (val) && isscalar (val)
+             && isfinite (val)))
+        error ("Octave:invalid-input-arg",
+               "vn_steady: %s must be a finite real scalar (%s)", name,
+               q.unitofmeasure);
+      endif
+      ovr(end+1) = struct ("q", q, "value", double (val));
+      continue;
+    endif
+    switch (lower (name))
+      case "target"
+        if (! iscell (val) || mod (numel (val), 2) != 0)
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: \"target\" must be a cell {OUTPUT, VALUE, ...}, e.g. {\"T2.level\", 1.5}");
+        endif
+        opt.target = val;
+      case "adjust"
+        if (ischar (val))
+          val = {val};
+        endif
+        if (! iscellstr (val))
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: \"adjust\" must be an input quantity or a cell of them, e.g. {\"F1.flow\"}");
+        endif
+        opt.adjust = val;
+      case "initial"
+        opt.initial = val;
+      case "maxiter"
+        if (! (isscalar (val) && isreal (val) && val >= 1 && val == fix (val)))
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: option \"maxiter\" must be a positive integer");
+        endif
+        opt.maxiter = val;
+      case "tol"
+        if (! (isscalar (val) && isreal (val) && val > 0 && val < 1))
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: option \"tol\" must lie in (0, 1)");
+        endif
+        opt.tol = val;
+      case "solver"
+        j = find (strcmpi ({"auto", "dense", "klu"}, val));
+        if (! ischar (val) || isempty (j))
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: option \"solver\" must be \"auto\", \"dense\" or \"klu\"");
+        endif
+        opt.solver = j - 1;
+      case {"simulate", "verbose"}
+        if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
+          error ("Octave:invalid-input-arg",
+                 "vn_steady: option \"%s\" must be true or false", lower (name));
+        endif
+        opt.(lower (name)) = logical (val);
+      otherwise
+        error ("Octave:invalid-input-arg",
+               "vn_steady: unknown option \"%s\"; allowed: target, adjust, initial, maxiter, tol, solver, simulate, verbose, or an input quantity \"UNIT.VARIABLE\"",
+               name);
+    endswitch
+  endfor
+endfunction
+
+## Targets (outputs and values) and adjusted inputs, 0-based for the core.
+function [padj, ytgt, tval, qadj] = inverse_problem (net, opt)
+  nt = numel (opt.target) / 2;
+  na = numel (opt.adjust);
+  if (nt != na)
+    error ("Octave:invalid-input-arg",
+           "vn_steady: %d target(s) but %d adjusted input(s); give as many inputs in \"adjust\" as outputs in \"target\"",
+           nt, na);
+  endif
+  ytgt = zeros (1, nt, "int32");
+  tval = zeros (nt, 1);
+  for k = 1:nt
+    name = opt.target{2*k-1};
+    val = opt.target{2*k};
+    q = vn_quantity (net, name, "output", "vn_steady");
+    if (! (isnumeric (val) && isreal (val) && isscalar (val) && isfinite (val)))
+      error ("Octave:invalid-input-arg",
+             "vn_steady: target %s must be a finite real scalar (%s)", name,
+             q.unitofmeasure);
+    endif
+    ytgt(k) = q.index;
+    tval(k) = val;
+  endfor
+  padj = zeros (1, na, "int32");
+  qadj = cell (1, na);
+  for k = 1:na
+    qadj{k} = vn_quantity (net, opt.adjust{k}, "input", "vn_steady");
+    padj(k) = qadj{k}.index;
+  endfor
+  if (numel (unique (opt.adjust)) < na)
+    error ("Octave:invalid-input-arg",
+           "vn_steady: \"adjust\" names an input twice: %s",
+           strjoin (opt.adjust, ", "));
+  endif
+endfunction
+
+function x0 = start_state (init)
+  if (isempty (init))
+    x0 = [];
+  elseif (isstruct (init) && isfield (init, "x"))
+    x0 = init.x(:);
+  elseif (isnumeric (init) && isreal (init) && isvector (init))
+    x0 = double (init(:));
+  else
+    error ("Octave:invalid-input-arg",
+           "vn_steady: option \"initial\" must be an operating point from vn_steady or a state vector");
+  endif
+endfunction
+
+## The result struct: unit fields as scalars, inputs, spilling tanks.
+function op = operating_point (net, x, y, states)
+  res = vn_results (net, 0, x(:).', y(:).', states, []);
+  op = struct ();
+  names = {};
+  values = [];
+  inputs = struct ();
+  s = vn_schema ();
+  op.spilling = cell (0, 1);
+  op.spill = zeros (0, 1);
+  for i = 1:numel (net.units)
+    un = net.units(i);
+    r = res.(un.name);
+    f = fieldnames (r);
+    for j = 1:numel (f)
+      r.(f{j}) = r.(f{j})(1);
+    endfor
+    op.(un.name) = r;
+    k = s.(un.kind);
+    for j = find (k.isinput)
+      v = r.(k.params{j});
+      if (! isnan (v))
+        names{end+1, 1} = [un.name "." k.params{j}];
+        values(end+1, 1) = v;
+        inputs.(un.name).(k.params{j}) = v;
+      endif
+    endfor
+    if (strcmp (un.kind, "tank") && r.spill > 0)
+      op.spilling{end+1, 1} = un.name;
+      op.spill(end+1, 1) = r.spill;
+    endif
+  endfor
+  op.x = x(:);
+  op.states = states;
+  op.units = res.units;
+  op.input_names = names;
+  op.input_values = values;
+  op.inputs = inputs;
+endfunction
+
+%!demo
+%! ## Invented example: a buffer tank above a filter bed, both draining
+%! ## through orifices; the feed that holds the bed's level at 1.5 m.
+%! net.type = "vesselnet.network"; net.name = "filter house";
+%! net.options = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
+%!                       "ambient", 15, "thermal", false, "species", {{}},
+%!                       "decay", [], "smooth", 1e-3);
+%! net.units = struct ("name", {"T1", "T2", "O1", "O2", "F1"},
+%!   "kind", {"tank", "tank", "orifice", "orifice", "feed"},
+%!   "from", {"", "", "T1", "T2", ""}, "to", {"", "", "T2", "", "T1"},
+%!   "par", {struct("area", 3, "level", 1), struct("area", 2, "level", 1),
+%!           struct("coeff", 0.012), struct("coeff", 0.01),
+%!           struct("flow", 0.01)},
+%!   "table", {[], [], [], [], []}, "aux", {struct(), struct(), struct(),
+%!   struct(), struct()});
+%! net.index = struct ("T1", 1, "T2", 2, "O1", 3, "O2", 4, "F1", 5);
+%! op = vn_steady (net);
+%! printf ("T1 %.3f m, T2 %.3f m at a feed of %.4f m3/s\n", op.T1.level,
+%!         op.T2.level, op.F1.flow);
+%! op = vn_steady (net, "target", {"T2.level", 1.5}, "adjust", {"F1.flow"});
+%! printf ("feed for T2 at 1.5 m: %.5f m3/s\n", op.adjusted.F1.flow);
+
+%!function net = hand_net (spec, opts)
+%!  ## spec rows: {name, kind, from, to, par}
+%!  net.type = "vesselnet.network";
+%!  net.name = "t";
+%!  net.options = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
+%!                        "ambient", 15, "thermal", false, "species", {{}},
+%!                        "decay", [], "smooth", 1e-3);
+%!  n = rows (spec);
+%!  net.units = struct ("name", spec(:,1)', "kind", spec(:,2)',
+%!                      "from", spec(:,3)', "to", spec(:,4)',
+%!                      "par", spec(:,5)', "table", cell (1, n),
+%!                      "aux", repmat ({struct()}, 1, n));
+%!  net.index = struct ();
+%!  for i = 1:n
+%!    net.index.(spec{i,1}) = i;
+%!  endfor
+%!endfunction
+
+%!test
+%! ## Orifice law F = c sqrt(h): steady level h = (F/c)^2 (Torricelli).
+%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
+%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
+%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! op = vn_steady (net);
+%! assert (op.T1.level, 1.0, 1e-9);
+%! assert (op.O1.flow, 0.01, 1e-12);
+%! assert (op.x, 2.0, 1e-8);
+%! assert (op.states, {"T1.volume"});
+%! assert (op.method, "newton");
+%! op = vn_steady (net, "F1.flow", 0.025);
+%! assert (op.T1.level, 6.25, 1e-8);
+%! assert (op.F1.flow, 0.025);
+%! assert (op.net.units(3).par.flow, 0.025);
+%! assert (op.input_names, {"F1.flow"});
+%! assert (op.inputs.F1.flow, 0.025);
+%! assert (op.relres < 1e-9);
+
+%!test
+%! ## Inverse: the feed holding h = 2.25 m is c sqrt(h) = 0.015 (Torricelli).
+%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
+%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
+%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! op = vn_steady (net, "target", {"T1.level", 2.25}, "adjust", "F1.flow");
+%! assert (op.adjusted.F1.flow, 0.015, 1e-10);
+%! assert (op.T1.level, 2.25, 1e-9);
+%! assert (op.net.units(3).par.flow, 0.015, 1e-10);
+
+%!error <2 target\(s\) but 1 adjusted>
+%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
+%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
+%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! vn_steady (net, "target", {"T1.level", 2, "T1.volume", 4}, "adjust", {"F1.flow"});
+%!error <no unit "T9">
+%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
+%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01)});
+%! vn_steady (net, "T9.flow", 0.1);
+%!error <unknown option "speed">
+%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
+%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01)});
+%! vn_steady (net, "speed", 0.1);
+%!error <Invalid call>
+%! vn_steady ();
