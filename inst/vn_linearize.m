@@ -50,7 +50,11 @@
 ## true: compute the poles above 2000 states too (dense eigenvalues, slow);
 ## false: skip them at any size.
 ## @item @qcode{"loop"}
-## @qcode{"open"} (the only choice yet): controllers are left out of the model.
+## @qcode{"closed"} (default): controllers and switches stay in the model,
+## so the inputs they drive are not free and their setpoints can be inputs;
+## @qcode{"open"}: controllers and switches are taken out and the inputs
+## they drive are held at their operating-point values (the loop opened at
+## the controller's output), as for tuning that loop.
 ## @end table
 ##
 ## A linear model holds near its operating point only: check it against a
@@ -73,6 +77,9 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
   inputs = name_list (inputs, "INPUTS");
   outputs = name_list (outputs, "OUTPUTS");
   [pnet, x, opstates] = lin_operating (net, op, "vn_linearize");
+  if (strcmp (opt.loop, "open"))
+    [net, pnet, x, opstates] = open_loops (net, pnet, x, op);
+  endif
 
   pin = zeros (1, numel (inputs), "int32");
   for j = 1:numel (inputs)
@@ -138,7 +145,7 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
 endfunction
 
 function opt = parse_options (args)
-  opt = struct ("sparse", false, "dense", false, "poles", []);
+  opt = struct ("sparse", false, "dense", false, "poles", [], "loop", "closed");
   if (mod (numel (args), 2) != 0)
     error ("Octave:invalid-input-arg",
            "vn_linearize: options come in name/value pairs");
@@ -159,11 +166,12 @@ function opt = parse_options (args)
         endif
         opt.(lower (name)) = logical (val);
       case "loop"
-        if (! (ischar (val) && strcmpi (val, "open")))
+        if (! (ischar (val) && any (strcmpi (val, {"open", "closed"}))))
           error ("Octave:invalid-input-arg",
-                 "vn_linearize: option \"loop\" must be \"open\" (closed-loop models with controllers are not available yet), got %s",
+                 "vn_linearize: option \"loop\" must be \"open\" or \"closed\", got %s",
                  shown (val));
         endif
+        opt.loop = lower (val);
       otherwise
         error ("Octave:invalid-input-arg",
                "vn_linearize: unknown option \"%s\"; allowed: sparse, dense, poles, loop",
@@ -174,6 +182,46 @@ function opt = parse_options (args)
     error ("Octave:invalid-input-arg",
            "vn_linearize: options \"sparse\" and \"dense\" cannot both be true");
   endif
+endfunction
+
+## Take controllers and switches out: the inputs they drive keep the value
+## they had at the operating point, their states leave the state vector.
+function [net, pnet, x, opstates] = open_loops (net, pnet, x, op)
+  kinds = {pnet.units.kind};
+  drop = find (strcmp (kinds, "controller") | strcmp (kinds, "switch"));
+  if (isempty (drop))
+    opstates = {};
+    return;
+  endif
+  [~, ~, ~, ~, names, x] = __vn_linearize__ (vn_pack (pnet), x,
+                                             zeros (1, 0, "int32"),
+                                             zeros (1, 0, "int32"), true);
+  keep = true (size (x));
+  for i = drop
+    u = pnet.units(i);
+    q = u.aux.manipulate;
+    dot = find (q == ".", 1);
+    tu = q(1:dot-1);
+    tv = q(dot+1:end);
+    if (isstruct (op) && isfield (op, u.name) && isfield (op.(u.name), "output"))
+      val = op.(u.name).output;
+      pnet.units(pnet.index.(tu)).par.(tv) = val;
+      net.units(net.index.(tu)).par.(tv) = val;
+    endif
+    keep &= ! strncmp (names, [u.name "."], numel (u.name) + 1);
+  endfor
+  x = x(keep);
+  opstates = names(keep);
+  pnet = drop_units (pnet, drop);
+  net = drop_units (net, drop);
+endfunction
+
+function net = drop_units (net, drop)
+  net.units(drop) = [];
+  net.index = struct ();
+  for i = 1:numel (net.units)
+    net.index.(net.units(i).name) = i;
+  endfor
 endfunction
 
 ## A string or cell array of strings, as a row cell.
@@ -295,7 +343,31 @@ endfunction
 %!error <another network> vn_linearize (net, [3; 1], "F1.flow", "T1.level")
 %!error <another network: its units differ> vn_linearize (net, setfield (op, "net", setfield (net, "units", net.units(1:2))), "F1.flow", "T1.level")
 %!error <another network: its states> vn_linearize (net, setfield (op, "states", {"T9.volume"}), "F1.flow", "T1.level")
-%!error <must be "open"> vn_linearize (net, op, "F1.flow", "T1.level", "loop", "closed")
+%!error <must be "open" or "closed"> vn_linearize (net, op, "F1.flow", "T1.level", "loop", "half")
 %!error <given twice> vn_linearize (net, op, {"F1.flow", "F1.flow"}, "T1.level")
 %!error <unknown option> vn_linearize (net, op, "F1.flow", "T1.level", "foo", 1)
 %!error vn_linearize (net, op, "F1.flow")
+
+%!test
+%! ## open and closed loop: a P level controller on an outlet valve
+%! ## (invented data); closed loop is faster, open loop is the plant alone
+%! net = vn_network ("ol");
+%! net = vn_tank (net, "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 150, "opening", 0.5, ...
+%!                 "characteristic", "linear");
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
+%!                      "LV1.opening", "setpoint", 1, "gain", 1, ...
+%!                      "action", "direct", "limits", [0 1]);
+%! op = vn_steady (net);
+%! lc = vn_linearize (net, op, "F1.flow", "T1.level");
+%! lo = vn_linearize (net, op, "F1.flow", "T1.level", "loop", "open");
+%! assert (numel (lc.states), 1);
+%! assert (numel (lo.states), 1);
+%! ## open loop: tau = 2 A h / F for a square-root outlet (Seborg et al., memory)
+%! h = op.T1.level;
+%! assert (lo.tau, 2 * 2 * h / 0.01, 1e-6 * lo.tau);
+%! ## closed loop adds the controller's gain to the outlet's: faster
+%! assert (lc.tau < lo.tau);
+%! k = 150 / 3600 * sqrt (999.1 * 9.80665 / 1e5) * sqrt (h);  # dQ/dx
+%! assert (1 / lc.tau, 1 / lo.tau + k / 2, 1e-6 / lc.tau);
