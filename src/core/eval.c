@@ -27,15 +27,17 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
   (void) t;
   int want_d = want_jx || want_jp;
   int want_dy = want_yx || want_yp;
+  net->want_d = want_d || want_dy;
   net->jx.n = net->jp.n = net->yx.n = net->yp.n = 0;
+  /* outputs only: the balances are not summed (own states still are) */
+  int balances = f != NULL || want_d;
   double *fw = f;
-  double *fscratch = NULL;
   if (!fw)
     {
-      fscratch = calloc ((size_t) net->nx, sizeof *fscratch);
-      if (!fscratch)
+      if (!net->fwork
+          && !(net->fwork = malloc ((size_t) net->nx * sizeof *net->fwork)))
         return VN_ENOMEM;
-      fw = fscratch;
+      fw = net->fwork;
     }
   memset (fw, 0, (size_t) net->nx * sizeof *fw);
 
@@ -76,10 +78,15 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
           u->dq.n = 0;
           u->q = u->k->flow (net, u, s, d, x,
                              (want_d || want_dy) ? &u->dq : NULL);
-          balance (net, u->ref[0], -1.0, u->q, &u->dq, fw, want_jx, want_jp);
-          balance (net, u->ref[1], +1.0, u->q, &u->dq, fw, want_jx, want_jp);
+          if (balances)
+            {
+              balance (net, u->ref[0], -1.0, u->q, &u->dq, fw, want_jx,
+                       want_jp);
+              balance (net, u->ref[1], +1.0, u->q, &u->dq, fw, want_jx,
+                       want_jp);
+            }
         }
-      else if (u->k->role == VN_ROLE_NODE && net->nd[i].istank)
+      else if (balances && u->k->role == VN_ROLE_NODE && net->nd[i].istank)
         {
           /* the spill over the rim leaves this tank for ref[0] or waste */
           balance (net, i, -1.0, u->q, &u->dq, fw, want_jx, want_jp);
@@ -103,8 +110,7 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
         if (y)
           memcpy (y + u->yoff, yu, (size_t) u->k->nout * sizeof *y);
       }
-  free (fscratch);
-  for (int i = 0; i < net->nx; i++)
+  for (int i = 0; i < net->nx && f; i++)
     if (!isfinite (fw[i]))
       return vn_fail (net, VN_ESOLVER, "the balance of %s \"%s\" is not "
                       "finite (%g)", net->u[vn_state_unit (net, i)].k->name,

@@ -2,18 +2,8 @@
 #include <stdlib.h>
 #include "vn_internal.h"
 
-/* Every operation accepts d == NULL (derivatives not wanted), so the
- * kinds write one code path for values and derivatives. */
-void vn_lf_zero (vn_lf *d)
+void vn_lf_add (vn_lf *d, int col, int isp, double v)
 {
-  if (d)
-    d->n = 0;
-}
-
-static void lf_add (vn_lf *d, int col, int isp, double v)
-{
-  if (!d)
-    return;
   /* merge a repeated column so long chains stay inside VN_LF */
   for (int i = 0; i < d->n; i++)
     if (d->col[i] == col && d->isp[i] == isp)
@@ -30,23 +20,10 @@ static void lf_add (vn_lf *d, int col, int isp, double v)
     }
 }
 
-void vn_lf_x (vn_lf *d, int col, double v) { lf_add (d, col, 0, v); }
-void vn_lf_p (vn_lf *d, int col, double v) { lf_add (d, col, 1, v); }
-
-void vn_lf_axpy (vn_lf *d, double a, const vn_lf *s)
+void vn_lf_axpy_ (vn_lf *d, double a, const vn_lf *s)
 {
-  if (!d || !s)
-    return;
   for (int i = 0; i < s->n; i++)
-    lf_add (d, s->col[i], s->isp[i], a * s->v[i]);
-}
-
-void vn_lf_scale (vn_lf *d, double a)
-{
-  if (!d)
-    return;
-  for (int i = 0; i < d->n; i++)
-    d->v[i] *= a;
+    vn_lf_add (d, s->col[i], s->isp[i], a * s->v[i]);
 }
 
 int vn_trip_add (vn_trip *T, int r, int c, double v)

@@ -57,6 +57,7 @@ void vn_net_free (vn_net *net)
   free (net->rowind);
   free (net->map);
   free (net->override);
+  free (net->fwork);
   free (net->ev);
   free (net);
 }

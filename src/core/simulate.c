@@ -21,6 +21,15 @@
 int vn_breakpoints (const vn_net *net, double t0, double t1, double **out,
                     int *n);
 
+/* Which outputs are recorded: all, or a chosen few.  When every chosen
+ * one belongs to a tank or boundary, only the node pass is evaluated. */
+typedef struct record {
+  int n;
+  const int *idx;
+  int nodes_only;
+  int *unit;        /* owning unit of each recorded output */
+} record;
+
 typedef struct sim {
   vn_net *net;
   int interrupted;
@@ -33,6 +42,7 @@ typedef struct sim {
   double tcache;    /* (t, y) of the Jacobian triplets in net->jx/jp */
   double *ycache;
   int cached;
+  record rec;
 } sim;
 
 /* Root functions: one per switch, crossing upwards when it must act. */
@@ -264,17 +274,35 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
     N_VDestroy (w);
 }
 
-static void store (vn_net *net, int k, int nt, double t, const double *x,
-                   double *X, double *Y)
+static void store (vn_net *net, const record *R, int k, int nt, double t,
+                   const double *x, double *X, double *Y)
 {
   for (int i = 0; i < net->nx; i++)
     X[k + (long) nt * i] = x[i];
-  if (Y)
+  if (!Y)
+    return;
+  if (!R->n)
     {
       vn_outputs (net, t, x, net->y);
       for (int i = 0; i < net->ny; i++)
         Y[k + (long) nt * i] = net->y[i];
+      return;
     }
+  if (R->nodes_only)
+    {
+      net->want_d = 0;
+      for (int j = 0; j < R->n; j++)
+        {
+          vn_unit *u = &net->u[R->unit[j]];
+          u->k->node (net, u, x, &net->nd[R->unit[j]]);
+          u->k->outputs (net, u, &net->nd[R->unit[j]], x, net->y + u->yoff,
+                         NULL);
+        }
+    }
+  else
+    vn_outputs (net, t, x, net->y);
+  for (int j = 0; j < R->n; j++)
+    Y[k + (long) nt * j] = net->y[R->idx[j]];
 }
 
 /* One call of CVode toward `target`: a failure is diagnosed, a switching
@@ -312,7 +340,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
 static int output_at (sim *S, void *mem, int k, int nt, double t, N_Vector y,
                       double *X, double *Y, int read_sens)
 {
-  store (S->net, k, nt, t, N_VGetArrayPointer (y), X, Y);
+  store (S->net, &S->rec, k, nt, t, N_VGetArrayPointer (y), X, Y);
   if (!S->yS)
     return VN_OK;
   double ts;
@@ -366,7 +394,34 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   if (st)
     return st;
 
-  sim S = {net, 0, 0, 0, NULL, NULL, sens, NULL, 0, NULL, 0};
+  sim S = {net, 0, 0, 0, NULL, NULL, sens, NULL, 0, NULL, 0, {0, NULL, 1, NULL}};
+  if (opt.nyrec > 0)
+    {
+      S.rec.unit = malloc ((size_t) opt.nyrec * sizeof *S.rec.unit);
+      if (!S.rec.unit)
+        {
+          free (bp);
+          return VN_ENOMEM;
+        }
+      for (int j = 0; j < opt.nyrec; j++)
+        {
+          int yi = opt.yrec[j], u = -1;
+          if (yi < 0 || yi >= net->ny)
+            {
+              free (bp);
+              free (S.rec.unit);
+              return vn_fail (net, VN_EARG, "simulate: recorded output %d "
+                              "has index %d outside the network", j + 1, yi);
+            }
+          for (int i = 0; i < net->nu && u < 0; i++)
+            if (yi >= net->u[i].yoff && yi < net->u[i].yoff + net->u[i].k->nout)
+              u = i;
+          S.rec.unit[j] = u;
+          S.rec.nodes_only &= net->u[u].k->role == VN_ROLE_NODE;
+        }
+      S.rec.n = opt.nyrec;
+      S.rec.idx = opt.yrec;
+    }
   if (sens)
     {
       for (int i = 0; i < sens->np; i++)
@@ -452,7 +507,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       for (int i = 0; i < S.nsw; i++)
         vn_switch_start (net, &net->u[S.sw[i]], x0);
     }
-  store (net, 0, nt, tout[0], x0, X, Y);
+  store (net, &S.rec, 0, nt, tout[0], x0, X, Y);
   mem = CVodeCreate (CV_BDF, ctx);
   if (!mem)
     {
@@ -602,6 +657,7 @@ done:
       sens->yrow = NULL;
     }
   free (S.ycache);
+  free (S.rec.unit);
   free (S.sw);
   free (S.scratch);
   return st;

@@ -333,15 +333,18 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
   nd->area = 1 / dldV;
   nd->pc_base = vn_pcol (u, BASE);
   nd->dH.n = 0;
-  vn_lf_x (&nd->dH, u->xoff, dldV);
+  u->dq.n = 0;
+  vn_lf *dH = net->want_d ? &nd->dH : NULL;
+  vn_lf *dq = net->want_d ? &u->dq : NULL;
+  vn_lf_x (dH, u->xoff, dldV);
   if (shape == PRISM)
     {
       /* level = V / A: the area (or diameter) can be estimated */
       double A = u->d[D_A], dldA = -V / (A * A);
       if (vn_given (net, u, AREA))
-        vn_lf_p (&nd->dH, vn_pcol (u, AREA), dldA);
+        vn_lf_p (dH, vn_pcol (u, AREA), dldA);
       else
-        vn_lf_p (&nd->dH, vn_pcol (u, DIAM),
+        vn_lf_p (dH, vn_pcol (u, DIAM),
                  dldA * VN_PI * net->p[u->poff + DIAM] / 2);
     }
   else if (shape != TABLE)
@@ -363,16 +366,15 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
           dVdD = V / R;
           dVdH = -2 * V / u->d[D_HTOP];
         }
-      vn_lf_p (&nd->dH, vn_pcol (u, DIAM), -dVdD * dldV);
+      vn_lf_p (dH, vn_pcol (u, DIAM), -dVdD * dldV);
       if (shape == HORIZ)
-        vn_lf_p (&nd->dH, vn_pcol (u, LEN), -dVdL * dldV);
+        vn_lf_p (dH, vn_pcol (u, LEN), -dVdL * dldV);
       if (shape == CONE)
-        vn_lf_p (&nd->dH, vn_pcol (u, HEIGHT), -dVdH * dldV);
+        vn_lf_p (dH, vn_pcol (u, HEIGHT), -dVdH * dldV);
     }
-  vn_lf_p (&nd->dH, vn_pcol (u, BASE), 1);
+  vn_lf_p (dH, vn_pcol (u, BASE), 1);
   /* spill over the rim (Francis) */
   double H = l - u->d[D_RIM];
-  u->dq.n = 0;
   u->q = 0;
   if (isfinite (u->d[D_RIM]))
     {
@@ -386,23 +388,23 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
           dqdL = Le > 0 ? 1.84 * H * sh : 0;
         }
       u->q = q;
-      vn_lf_axpy (&u->dq, dqdH, &nd->dH);
-      vn_lf_p (&u->dq, vn_pcol (u, BASE), -dqdH);
+      vn_lf_axpy (dq, dqdH, dH);
+      vn_lf_p (dq, vn_pcol (u, BASE), -dqdH);
       if (vn_given (net, u, RIM))
-        vn_lf_p (&u->dq, vn_pcol (u, RIM), -dqdH);
+        vn_lf_p (dq, vn_pcol (u, RIM), -dqdH);
       else if (shape == PRISM && vn_given (net, u, HEIGHT))
-        vn_lf_p (&u->dq, vn_pcol (u, HEIGHT), -dqdH);
+        vn_lf_p (dq, vn_pcol (u, HEIGHT), -dqdH);
       else if (shape == HORIZ || shape == SPHERE)
-        vn_lf_p (&u->dq, vn_pcol (u, DIAM), -dqdH);   /* rim = top */
+        vn_lf_p (dq, vn_pcol (u, DIAM), -dqdH);   /* rim = top */
       else if (shape == CONE)
-        vn_lf_p (&u->dq, vn_pcol (u, HEIGHT), -dqdH);
+        vn_lf_p (dq, vn_pcol (u, HEIGHT), -dqdH);
       /* the crest, given or (prism) the perimeter of a round plan */
       if (vn_given (net, u, CREST))
-        vn_lf_p (&u->dq, vn_pcol (u, CREST), dqdL);
+        vn_lf_p (dq, vn_pcol (u, CREST), dqdL);
       else if (shape == PRISM && vn_given (net, u, AREA))
-        vn_lf_p (&u->dq, vn_pcol (u, AREA), dqdL * sqrt (VN_PI / u->d[D_A]));
+        vn_lf_p (dq, vn_pcol (u, AREA), dqdL * sqrt (VN_PI / u->d[D_A]));
       else if (shape == PRISM)
-        vn_lf_p (&u->dq, vn_pcol (u, DIAM), dqdL * VN_PI);
+        vn_lf_p (dq, vn_pcol (u, DIAM), dqdL * VN_PI);
     }
 }
 

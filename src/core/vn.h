@@ -121,6 +121,8 @@ typedef struct vn_sim_opts {
   double hmax;             /* 0 = no limit */
   int (*stop) (void *);    /* polled; non-zero stops the run */
   void *stop_data;
+  int nyrec;               /* > 0: record only these outputs, Y is nt x nyrec */
+  const int *yrec;         /* output indices */
 } vn_sim_opts;
 
 typedef struct vn_sim_stats {

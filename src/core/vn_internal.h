@@ -22,11 +22,19 @@ typedef struct vn_lf {
   double v[VN_LF];
 } vn_lf;
 
-void vn_lf_zero (vn_lf *d);
-void vn_lf_x (vn_lf *d, int col, double v);
-void vn_lf_p (vn_lf *d, int col, double v);
-void vn_lf_axpy (vn_lf *d, double a, const vn_lf *s);   /* d += a s */
-void vn_lf_scale (vn_lf *d, double a);
+/* Every operation accepts d == NULL (derivatives not wanted) and is then
+ * free, so the kinds write one code path for values and derivatives. */
+void vn_lf_add (vn_lf *d, int col, int isp, double v);
+void vn_lf_axpy_ (vn_lf *d, double a, const vn_lf *s);
+static inline void vn_lf_zero (vn_lf *d) { if (d) d->n = 0; }
+static inline void vn_lf_x (vn_lf *d, int col, double v)
+{ if (d) vn_lf_add (d, col, 0, v); }
+static inline void vn_lf_p (vn_lf *d, int col, double v)
+{ if (d) vn_lf_add (d, col, 1, v); }
+static inline void vn_lf_axpy (vn_lf *d, double a, const vn_lf *s)
+{ if (d && s) vn_lf_axpy_ (d, a, s); }   /* d += a s */
+static inline void vn_lf_scale (vn_lf *d, double a)
+{ if (d) for (int i = 0; i < d->n; i++) d->v[i] *= a; }
 
 /* Triplet buffer for Jacobian emission. */
 typedef struct vn_trip {
@@ -130,6 +138,8 @@ struct vn_net {
   vn_lf *dy;        /* per output */
   double *y;        /* per output */
   vn_trip jx, jp, yx, yp;
+  int want_d;       /* this evaluation wants derivatives */
+  double *fwork;    /* nx: balances when the caller wants outputs only */
   /* sparse pattern of df/dx */
   long nnz;
   long *colptr, *rowind, *map;

@@ -43,6 +43,18 @@ DEFUN_DLD (__vn_simulate__, args, ,
   so.maxsteps = o.contents ("maxsteps").long_value ();
   so.hmax = o.contents ("maxstep").double_value ();
   so.stop = vn_gw_stop;
+  // opts.record: record only these outputs (0-based indices)
+  std::vector<int> rec;
+  if (o.isfield ("record") && ! o.contents ("record").isempty ())
+    {
+      int32NDArray r = o.contents ("record").int32_array_value ();
+      rec.resize (r.numel ());
+      for (octave_idx_type i = 0; i < r.numel (); i++)
+        rec[i] = r(i).value ();
+      so.nyrec = rec.size ();
+      so.yrec = rec.data ();
+      ny = rec.size ();
+    }
   int nt = tout.numel ();
   Matrix X (nt, nx), Y (nt, ny);
   vn_sim_stats stats;
