@@ -9,7 +9,7 @@
 
 #define VN_OWNMAX 4
 
-static void balance (vn_net *net, int tank, double sign, double q,
+static inline void balance (vn_net *net, int tank, double sign, double q,
                      const vn_lf *dq, double *f, int want_jx, int want_jp)
 {
   if (tank < 0 || !net->nd[tank].istank)

@@ -73,10 +73,13 @@ double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
   (void) net;
   int fwd = dh >= 0;
   double gs = 1, gd = 1, dgs = 0, dgd = 0;
-  if (s && s->istank)
+  /* without derivatives only the upstream side matters */
+  if (s && s->istank && (fwd || dg))
     gs = vn_gate (s->level - outlet, band, &dgs);
-  if (d && d->istank)
+  if (d && d->istank && (!fwd || dg))
     gd = vn_gate (d->level - inlet, band, &dgd);
+  if (!dg)
+    return fwd ? gs : gd;
   double cs = fwd ? dgs : 0, cd = fwd ? 0 : dgd;
   if (s && s->istank)
     {

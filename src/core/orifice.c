@@ -28,12 +28,19 @@ static int check (vn_net *net, vn_unit *u)
                          "cd), %s", gc ? "not both" : "got neither");
   if (gc && vn_given (net, u, CD))
     return vn_fail_unit (net, u, "cd goes with diameter, not with coeff");
+  /* the coefficient is no input: compute it once (again when a parameter
+   * is set, since vn_param_set re-runs this check) */
+  u->d[0] = gc ? vn_par (net, u, COEFF)
+               : VN_PI / 4 * sqrt (2 * net->g) * vn_par (net, u, CD)
+                 * vn_par (net, u, DIAM) * vn_par (net, u, DIAM);
   return VN_OK;
 }
 
 /* the coefficient and its derivatives */
 static double coeff (const vn_net *net, const vn_unit *u, vn_lf *dc)
 {
+  if (!dc)
+    return u->d[0];
   if (vn_given (net, u, COEFF))
     {
       vn_lf_p (dc, vn_pcol (u, COEFF), 1);
