@@ -3,11 +3,15 @@
 #include <math.h>
 #include "vn_internal.h"
 
-enum { HEAD, TEMP, NPAR };
+enum { HEAD, TEMP, C1, NPAR = C1 + VN_NSP };
 
 static const vn_param_info par[NPAR] = {
   {"head", NAN, -1e5, 1e5, "m", VN_P_INPUT},
   {"temperature", NAN, -50, 400, "degC", VN_P_INPUT},
+  {"c1", 0, 0, 1e12, "conc", VN_P_INPUT}, {"c2", 0, 0, 1e12, "conc", VN_P_INPUT},
+  {"c3", 0, 0, 1e12, "conc", VN_P_INPUT}, {"c4", 0, 0, 1e12, "conc", VN_P_INPUT},
+  {"c5", 0, 0, 1e12, "conc", VN_P_INPUT}, {"c6", 0, 0, 1e12, "conc", VN_P_INPUT},
+  {"c7", 0, 0, 1e12, "conc", VN_P_INPUT}, {"c8", 0, 0, 1e12, "conc", VN_P_INPUT},
 };
 static const char *const out[] = {"head"};
 static const char *const ounit[] = {"m"};
@@ -32,6 +36,8 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
   nd->V = 0;
   nd->area = INFINITY;
   nd->pc_base = -1;
+  nd->xV = -1;
+  vn_feed_props (net, u, nd);
   nd->dH.n = 0;
   vn_lf_p (&nd->dH, vn_pcol (u, HEAD), 1);
 }
@@ -49,5 +55,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_boundary = {
   "boundary", VN_ROLE_NODE, NPAR, par, 1, out, ounit,
-  check, NULL, NULL, NULL, node, NULL, NULL, NULL, outputs
+  check, NULL, NULL, NULL, node, NULL, NULL, NULL, NULL, outputs
 };

@@ -7,7 +7,7 @@
 #include <string.h>
 #include "vn_internal.h"
 
-#define VN_OWNMAX 4
+#define VN_OWNMAX 12
 
 static inline void balance (vn_net *net, int tank, double sign, double q,
                      const vn_lf *dq, double *f, int want_jx, int want_jp)
@@ -21,6 +21,78 @@ static inline void balance (vn_net *net, int tank, double sign, double q,
              want_jp ? &net->jp : NULL);
 }
 
+/* A carried property j (0: temperature when thermal, then each species)
+ * of a node, and its derivative scaled by a. */
+static double prop (const vn_net *net, const vn_node *n, int j, double a,
+                    vn_lf *d)
+{
+  if (net->thermal && j == 0)
+    {
+      if (n->xE >= 0)
+        {
+          vn_lf_x (d, n->xV, a * n->dTdV);
+          vn_lf_x (d, n->xE, a * n->dTdE);
+        }
+      else if (n->pcT >= 0)
+        vn_lf_p (d, n->pcT, a);
+      return n->T;
+    }
+  int k = j - net->thermal;
+  if (n->xM0 >= 0)
+    {
+      vn_lf_x (d, n->xV, a * n->dcdV[k]);
+      vn_lf_x (d, n->xM0 + k, a * n->dcdM[k]);
+    }
+  else if (n->pcc0 >= 0)
+    vn_lf_p (d, n->pcc0 + k, a);
+  return n->c[k];
+}
+
+/* Row of property j in a tank's balances. */
+static int prop_row (const vn_net *net, const vn_node *n, int j)
+{
+  return (net->thermal && j == 0) ? n->xE : n->xM0 + j - net->thermal;
+}
+
+/* A flow q from ps to pd carries the upstream side's temperature and
+ * concentrations: flux q * p_up out of a source tank and into a
+ * destination tank (both ends' entries are added, structurally). */
+static void carry (vn_net *net, const vn_node *ps, int stank,
+                   const vn_node *pd, int dtank, double q, const vn_lf *dq,
+                   double *f, int want_jx, int want_jp)
+{
+  int fwd = q >= 0 || !pd;
+  int want = want_jx || want_jp;
+  int np = net->thermal + net->nspecies;
+  for (int j = 0; j < np; j++)
+    {
+      vn_lf df;
+      df.n = 0;
+      vn_lf *pdf = want ? &df : NULL;
+      double vs = prop (net, ps, j, fwd ? q : 0, pdf);
+      double vd = pd ? prop (net, pd, j, fwd ? 0 : q, pdf) : vs;
+      double up = fwd ? vs : vd;
+      vn_lf_axpy (pdf, up, dq);
+      double flux = q * up;
+      if (stank)
+        {
+          int r = prop_row (net, ps, j);
+          f[r] -= flux;
+          if (want)
+            vn_emit (net, r, -1, &df, want_jx ? &net->jx : NULL,
+                     want_jp ? &net->jp : NULL);
+        }
+      if (dtank)
+        {
+          int r = prop_row (net, pd, j);
+          f[r] += flux;
+          if (want)
+            vn_emit (net, r, 1, &df, want_jx ? &net->jx : NULL,
+                     want_jp ? &net->jp : NULL);
+        }
+    }
+}
+
 int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
              int want_jx, int want_jp, int want_yx, int want_yp)
 {
@@ -31,6 +103,7 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
   net->jx.n = net->jp.n = net->yx.n = net->yp.n = 0;
   /* outputs only: the balances are not summed (own states still are) */
   int balances = f != NULL || want_d;
+  int nprop = net->thermal + net->nspecies;
   double *fw = f;
   if (!fw)
     {
@@ -60,7 +133,8 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
       vn_unit *u = &net->u[i];
       if ((pass == 1) != (u->k->role == VN_ROLE_OTHER))
         continue;
-      if (u->k->own && u->nx > 0)
+      /* a tank has own terms only with properties (heat loss, decay) */
+      if (u->k->own && u->nx > (u->k->role == VN_ROLE_NODE))
         {
           vn_lf df[VN_OWNMAX];
           for (int j = 0; j < u->nx && j < VN_OWNMAX; j++)
@@ -84,6 +158,18 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
                        want_jp);
               balance (net, u->ref[1], +1.0, u->q, &u->dq, fw, want_jx,
                        want_jp);
+              if (nprop)
+                {
+                  vn_node own_props;
+                  const vn_node *ps = s;
+                  if (!s)
+                    {
+                      vn_feed_props (net, u, &own_props);
+                      ps = &own_props;
+                    }
+                  carry (net, ps, s && s->istank, d, d && d->istank, u->q,
+                         &u->dq, fw, want_jx, want_jp);
+                }
             }
         }
       else if (balances && u->k->role == VN_ROLE_NODE && net->nd[i].istank)
@@ -92,6 +178,26 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
           balance (net, i, -1.0, u->q, &u->dq, fw, want_jx, want_jp);
           balance (net, u->ref[0], +1.0, u->q, &u->dq, fw, want_jx,
                    want_jp);
+          if (nprop)
+            carry (net, &net->nd[i], 1,
+                   u->ref[0] >= 0 ? &net->nd[u->ref[0]] : NULL,
+                   u->ref[0] >= 0, u->q, &u->dq, fw, want_jx, want_jp);
+        }
+      else if (u->k->role == VN_ROLE_HEAT)
+        {
+          /* heat into the tank's energy: d(VT)/dt += Q / (rho cp) */
+          const vn_node *tk = &net->nd[u->ref[1]];
+          u->dq.n = 0;
+          double Q = u->k->heat (net, u, tk, x,
+                                 (want_d || want_dy) ? &u->dq : NULL);
+          if (balances)
+            {
+              double c = 1 / (net->rho * net->cp);
+              fw[tk->xE] += c * Q;
+              if (want_d)
+                vn_emit (net, tk->xE, c, &u->dq, want_jx ? &net->jx : NULL,
+                         want_jp ? &net->jp : NULL);
+            }
         }
     }
   if (y || want_dy)

@@ -105,9 +105,9 @@ static int setup_globals (vn_net *net, const vn_spec *s)
   if (!(net->smooth > 0) || !(net->smooth <= 0.1))
     return vn_fail (net, VN_EARG, "network: smooth must lie in (0, 0.1] "
                     "(m), got %g", net->smooth);
-  if (net->nspecies < 0 || net->nspecies > 16)
-    return vn_fail (net, VN_EARG, "network: between 0 and 16 species are "
-                    "allowed, got %d", net->nspecies);
+  if (net->nspecies < 0 || net->nspecies > VN_NSP)
+    return vn_fail (net, VN_EARG, "network: between 0 and %d species are "
+                    "allowed, got %d", VN_NSP, net->nspecies);
   if (net->nspecies > 0)
     {
       net->decay = calloc ((size_t) net->nspecies, sizeof *net->decay);
@@ -123,12 +123,6 @@ static int setup_globals (vn_net *net, const vn_spec *s)
           net->decay[i] = k;
         }
     }
-  /* energy and species balances are planned, not built: refuse rather
-   * than carry temperatures the model would not balance */
-  if (net->thermal || net->nspecies > 0)
-    return vn_fail (net, VN_EARG, "network: energy (thermal) and species "
-                    "balances are not available in this version; declare "
-                    "the network without \"thermal\" and \"species\"");
   return VN_OK;
 }
 

@@ -135,5 +135,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_pump = {
   "pump", VN_ROLE_LINK, NPAR, par, 2, out, ounit,
-  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, outputs
+  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, NULL, outputs
 };

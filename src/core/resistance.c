@@ -48,5 +48,5 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
 
 const vn_kind vn_kind_resistance = {
   "resistance", VN_ROLE_LINK, NPAR, par, 1, out, ounit,
-  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, vn_link_flow_output
+  check, NULL, NULL, NULL, NULL, flow, NULL, NULL, NULL, vn_link_flow_output
 };

@@ -7,7 +7,7 @@
 static const vn_kind *const kinds[] = {
   &vn_kind_tank, &vn_kind_boundary, &vn_kind_feed, &vn_kind_orifice,
   &vn_kind_resistance, &vn_kind_valve, &vn_kind_pump, &vn_kind_controller,
-  &vn_kind_switch
+  &vn_kind_switch, &vn_kind_heater
 };
 #define NKINDS ((int) (sizeof kinds / sizeof kinds[0]))
 

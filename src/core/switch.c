@@ -79,5 +79,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_switch = {
   "switch", VN_ROLE_OTHER, NPAR, par, 2, out, ounit,
-  check, NULL, NULL, NULL, NULL, NULL, NULL, pre, outputs
+  check, NULL, NULL, NULL, NULL, NULL, NULL, pre, NULL, outputs
 };

@@ -17,10 +17,12 @@
 #include "vn_internal.h"
 
 enum { SHAPE, AREA, DIAM, LEN, HEIGHT, BASE, RIM, CREST, CONTR, LEVEL,
-       VOLUME, UA, TEMP, NPAR };
+       VOLUME, UA, TEMP, C1, NPAR = C1 + VN_NSP };
+#define VMIN 1e-9   /* m3: below this a tank's properties are held */
 enum { PRISM = 0, HORIZ = 1, SPHERE = 2, CONE = 3, TABLE = 4 };
 /* derived constants in u->d */
 enum { D_A, D_R, D_L, D_VTOP, D_HTOP, D_AMAX, D_RIM, D_CREST };
+#define D_THERMAL 8   /* 1 when the network is thermal (for state names) */
 
 static const vn_param_info par[NPAR] = {
   {"shape", 0, 0, 4, "code", VN_P_CODE},
@@ -36,9 +38,18 @@ static const vn_param_info par[NPAR] = {
   {"volume", NAN, 0, 1e12, "m3", 0},
   {"ua", 0, 0, 1e9, "W/K", 0},
   {"temperature", NAN, -50, 400, "degC", 0},
+  {"c1", 0, 0, 1e12, "conc", 0}, {"c2", 0, 0, 1e12, "conc", 0},
+  {"c3", 0, 0, 1e12, "conc", 0}, {"c4", 0, 0, 1e12, "conc", 0},
+  {"c5", 0, 0, 1e12, "conc", 0}, {"c6", 0, 0, 1e12, "conc", 0},
+  {"c7", 0, 0, 1e12, "conc", 0}, {"c8", 0, 0, 1e12, "conc", 0},
 };
-static const char *const out[] = {"level", "volume", "head", "spill"};
-static const char *const ounit[] = {"m", "m3", "m", "m3/s"};
+static const char *const out[] = {"level", "volume", "head", "spill",
+                                  "temperature", "c1", "c2", "c3", "c4",
+                                  "c5", "c6", "c7", "c8"};
+static const char *const ounit[] = {"m", "m3", "m", "m3/s", "degC", "conc",
+                                    "conc", "conc", "conc", "conc", "conc",
+                                    "conc", "conc"};
+#define NOUT 13
 
 static const char *shape_name (int s)
 {
@@ -274,6 +285,7 @@ static int check (vn_net *net, vn_unit *u)
   if (!vn_given (net, u, CREST))
     crest = shape == HORIZ ? d[D_L] : 2 * sqrt (VN_PI * d[D_AMAX]);
   d[D_CREST] = crest;
+  d[D_THERMAL] = net->thermal;
   double lev = vn_par (net, u, LEVEL);
   if ((shape == HORIZ || shape == SPHERE || shape == CONE)
       && lev > d[D_HTOP])
@@ -297,26 +309,75 @@ static int check (vn_net *net, vn_unit *u)
   return VN_OK;
 }
 
+/* States: volume; V T (m3 degC) when thermal; V c per species.  The
+ * contents, not the intensive values, are balanced (conserved form), so
+ * energy and mass are conserved exactly and an emptying tank stays sane. */
 static int nstates (const vn_net *net, const vn_unit *u)
 {
-  (void) net;
   (void) u;
-  return 1;
+  return 1 + net->thermal + net->nspecies;
 }
 
 static const char *state_var (const vn_unit *u, int i)
 {
-  (void) u;
-  (void) i;
-  return "volume";
+  static const char *const sp[VN_NSP] = {"species1", "species2", "species3",
+                                         "species4", "species5", "species6",
+                                         "species7", "species8"};
+  int th = i == 1 && u->d[D_THERMAL];
+  if (i == 0)
+    return "volume";
+  if (th)
+    return "heat";
+  int k = i - 1 - (int) u->d[D_THERMAL];
+  return (k >= 0 && k < VN_NSP) ? sp[k] : "state";
 }
 
 static int init (vn_net *net, vn_unit *u, double *x)
 {
   int shape = (int) vn_par (net, u, SHAPE);
-  x[0] = vn_given (net, u, VOLUME) ? vn_par (net, u, VOLUME)
-                                   : volume_of (u, shape, vn_par (net, u, LEVEL));
+  double V = vn_given (net, u, VOLUME) ? vn_par (net, u, VOLUME)
+                                       : volume_of (u, shape,
+                                                    vn_par (net, u, LEVEL));
+  x[0] = V;
+  int j = 1;
+  if (net->thermal)
+    {
+      double T = vn_given (net, u, TEMP) ? vn_par (net, u, TEMP)
+                                         : net->ambient;
+      x[j++] = V * T;
+    }
+  for (int k = 0; k < net->nspecies; k++)
+    x[j++] = V * vn_par (net, u, C1 + k);
   return VN_OK;
+}
+
+/* Heat loss to ambient, UA (T - Ta) / (rho cp), and first-order decay of
+ * each species, k M: the tank's own terms in its energy and species
+ * balances (flows are added by the framework). */
+static void own (vn_net *net, vn_unit *u, const double *x, double *f,
+                 vn_lf *df)
+{
+  const vn_node *nd = &net->nd[u - net->u];
+  int j = 1;
+  if (net->thermal)
+    {
+      double c = net->p[u->poff + UA] / (net->rho * net->cp);
+      f[u->xoff + j] += -c * (nd->T - net->ambient);
+      if (df)
+        {
+          vn_lf_x (&df[j], u->xoff, -c * nd->dTdV);
+          vn_lf_x (&df[j], u->xoff + j, -c * nd->dTdE);
+          vn_lf_p (&df[j], vn_pcol (u, UA),
+                   -(nd->T - net->ambient) / (net->rho * net->cp));
+        }
+      j++;
+    }
+  for (int k = 0; k < net->nspecies; k++, j++)
+    {
+      f[u->xoff + j] += -net->decay[k] * x[u->xoff + j];
+      if (df)
+        vn_lf_x (&df[j], u->xoff + j, -net->decay[k]);
+    }
 }
 
 static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
@@ -332,6 +393,32 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
   nd->H = base + l;
   nd->area = 1 / dldV;
   nd->pc_base = vn_pcol (u, BASE);
+  nd->xV = u->xoff;
+  /* carried properties from the contents: T = E/V, c = M/V, held as the
+   * volume falls below VMIN so an empty tank keeps a finite value */
+  {
+    double Ve = V > VMIN ? V : VMIN;
+    int j = u->xoff + 1;
+    nd->xE = -1;
+    nd->pcT = -1;
+    nd->T = NAN;
+    if (net->thermal)
+      {
+        double E = x[j];
+        nd->xE = j++;
+        nd->T = E / Ve;
+        nd->dTdE = 1 / Ve;
+        nd->dTdV = V > VMIN ? -E / (V * V) : 0;
+      }
+    nd->xM0 = net->nspecies ? j : -1;
+    nd->pcc0 = -1;
+    for (int k = 0; k < net->nspecies; k++, j++)
+      {
+        nd->c[k] = x[j] / Ve;
+        nd->dcdM[k] = 1 / Ve;
+        nd->dcdV[k] = V > VMIN ? -x[j] / (V * V) : 0;
+      }
+  }
   nd->dH.n = 0;
   u->dq.n = 0;
   vn_lf *dH = net->want_d ? &nd->dH : NULL;
@@ -416,17 +503,29 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
   y[1] = nd->V;
   y[2] = nd->H;
   y[3] = u->q;
+  y[4] = nd->T;
+  for (int k = 0; k < VN_NSP; k++)
+    y[5 + k] = k < net->nspecies ? nd->c[k] : NAN;
   if (!dy)
     return;
+  if (net->thermal)
+    {
+      vn_lf_x (&dy[4], nd->xV, nd->dTdV);
+      vn_lf_x (&dy[4], nd->xE, nd->dTdE);
+    }
+  for (int k = 0; k < net->nspecies; k++)
+    {
+      vn_lf_x (&dy[5 + k], nd->xV, nd->dcdV[k]);
+      vn_lf_x (&dy[5 + k], nd->xM0 + k, nd->dcdM[k]);
+    }
   vn_lf_axpy (&dy[0], 1, &nd->dH);
   vn_lf_p (&dy[0], vn_pcol (u, BASE), -1);
   vn_lf_x (&dy[1], u->xoff, 1);
   vn_lf_axpy (&dy[2], 1, &nd->dH);
   vn_lf_axpy (&dy[3], 1, &u->dq);
-  (void) net;
 }
 
 const vn_kind vn_kind_tank = {
-  "tank", VN_ROLE_NODE, NPAR, par, 4, out, ounit,
-  check, nstates, state_var, init, node, NULL, NULL, NULL, outputs
+  "tank", VN_ROLE_NODE, NPAR, par, NOUT, out, ounit,
+  check, nstates, state_var, init, node, NULL, own, NULL, NULL, outputs
 };

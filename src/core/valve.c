@@ -175,5 +175,5 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 
 const vn_kind vn_kind_valve = {
   "valve", VN_ROLE_LINK, NPAR, par, 2, out, ounit,
-  check, nstates, state_var, init, NULL, flow, own, NULL, outputs
+  check, nstates, state_var, init, NULL, flow, own, NULL, NULL, outputs
 };

@@ -7,7 +7,8 @@
 
 #define VN_PI 3.14159265358979323846
 
-#define VN_NPMAX 16       /* parameter slots per unit */
+#define VN_NPMAX 32       /* parameter slots per unit */
+#define VN_NSP 8          /* species a network may carry */
 #define VN_LF 24          /* entries of one derivative linear form */
 #define VN_NAMELEN 64
 
@@ -52,13 +53,21 @@ typedef struct vn_node {
   double V;       /* volume (tank) */
   double area;    /* dV/dlevel, floored (tank) */
   int pc_base;    /* parameter column of the base elevation, -1 if none */
+  /* carried properties: temperature and concentrations.  A tank's come
+   * from its states, T = E / V, c = M / V (E, M the conserved contents);
+   * a boundary's from its parameters (pcol >= 0). */
+  int xV;         /* volume state of a tank, -1 otherwise */
+  double T, dTdV, dTdE;
+  int xE, pcT;    /* energy state (tank) or temperature parameter, -1 none */
+  double c[VN_NSP], dcdV[VN_NSP], dcdM[VN_NSP];
+  int xM0, pcc0;  /* first species state (tank) or parameter, -1 none */
   vn_lf dH;       /* derivative of the head */
 } vn_node;
 
 typedef struct vn_unit vn_unit;
 typedef struct vn_kind vn_kind;
 
-enum { VN_ROLE_NODE = 1, VN_ROLE_LINK = 2, VN_ROLE_OTHER = 3 };
+enum { VN_ROLE_NODE = 1, VN_ROLE_LINK = 2, VN_ROLE_OTHER = 3, VN_ROLE_HEAT = 4 };
 
 struct vn_unit {
   int kind;
@@ -70,7 +79,7 @@ struct vn_unit {
   int yoff;               /* first output */
   const double *tab;      /* table pairs (owned by net) */
   int ntab;
-  double d[8];            /* derived constants set by the kind's check */
+  double d[12];           /* derived constants set by the kind's check */
   /* evaluation scratch */
   double q;               /* flow of a link, spill of a tank */
   vn_lf dq;
@@ -100,6 +109,9 @@ struct vn_kind {
   /* controllers and switches: set the manipulated input after the nodes
    * are known, before any flow is computed */
   void (*pre) (vn_net *net, vn_unit *u, const double *x);
+  /* heat role: heat flow (W) into the tank ref[1] */
+  double (*heat) (vn_net *net, vn_unit *u, const vn_node *d, const double *x,
+                  vn_lf *dQ);
   /* outputs, after nodes and flows are known */
   void (*outputs) (vn_net *net, vn_unit *u, const vn_node *nd,
                    const double *x, double *y, vn_lf *dy);
@@ -158,7 +170,10 @@ struct vn_net {
 /* kinds */
 extern const vn_kind vn_kind_tank, vn_kind_boundary, vn_kind_feed,
   vn_kind_orifice, vn_kind_resistance, vn_kind_valve, vn_kind_pump,
-  vn_kind_controller, vn_kind_switch;
+  vn_kind_controller, vn_kind_switch, vn_kind_heater;
+
+/* Properties carried by a flow out of a feed (its own parameters). */
+void vn_feed_props (const vn_net *net, const vn_unit *u, vn_node *nd);
 
 /* Measured quantity of a controller or switch: ref[0] unit, ref[1] its
  * output; the value and its derivative (NULL: not wanted). */

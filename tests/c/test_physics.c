@@ -43,7 +43,7 @@ static void torricelli (void)
       return;
     }
   enum { NT = 3001 };
-  static double tout[NT], X[NT], Y[NT * 8];
+  static double tout[NT], X[NT], Y[NT * 64];
   for (int k = 0; k < NT; k++)
     tout[k] = 0.1 * k;
   double x0[1];
@@ -180,7 +180,7 @@ static void weir (void)
       VT_CHECK (0, "weir: network builds (%s)", b.msg);
       return;
     }
-  double tout[2] = {0, 300}, X[2], Y[2 * 8], x0[1];
+  double tout[2] = {0, 300}, X[2], Y[2 * 64], x0[1];
   vn_initial_state (net, x0);
   vn_sim_opts op = tight ();
   vn_sim_stats s;
@@ -221,7 +221,7 @@ static void pump_system (double speed, double qref, double href)
       VT_CHECK (0, "pump: network builds (%s)", b.msg);
       return;
     }
-  double tout[2] = {0, 2e4}, X[2], Y[2 * 16], x0[1];
+  double tout[2] = {0, 2e4}, X[2], Y[2 * 64], x0[1];
   vn_initial_state (net, x0);
   vn_sim_opts op = tight ();
   vn_sim_stats s;
@@ -327,7 +327,7 @@ static void breakpoint (int hold)
             hold ? "hold" : "two points at t 100", st ? vn_errmsg (net) : "ok");
   enum { NT = 8 };
   double tout[NT] = {0, 50, 99.9, 100, 100.1, 150, 200, 500};
-  double X[NT], Y[NT * 8], x0[1];
+  double X[NT], Y[NT * 64], x0[1];
   vn_initial_state (net, x0);
   vn_sim_opts op;
   memset (&op, 0, sizeof op);

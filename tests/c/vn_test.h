@@ -56,8 +56,8 @@ typedef struct vt_net {
   int kind[VT_MAXU];
   const char *name[VT_MAXU];
   int ref[4 * VT_MAXU];
-  double par[16 * VT_MAXU];
-  unsigned char given[16 * VT_MAXU];
+  double par[32 * VT_MAXU];
+  unsigned char given[32 * VT_MAXU];
   double tab[2 * VT_MAXTAB];
   int taboff[VT_MAXU], tablen[VT_MAXU];
   int ntab;
@@ -82,7 +82,7 @@ static inline int vt_unit (vt_net *b, const char *kind, const char *name,
                            int r0, int r1)
 {
   int u = b->n++;
-  if (u >= VT_MAXU || vn_npmax () > 16)
+  if (u >= VT_MAXU || vn_npmax () > 32)
     {
       fprintf (stderr, "vt_unit: builder too small\n");
       exit (2);
