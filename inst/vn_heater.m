@@ -5,8 +5,9 @@
 ## The heater's duty (W) is an input: a signal or a controller may drive
 ## @qcode{"NAME.duty"}.  It enters the tank's energy balance,
 ## @code{d(V T)/dt = ... + Q/(rho cp)}, only while the element is covered
-## (a smooth gate on the level over the network's smoothing band), so a
-## tank run dry while heated keeps a bounded temperature.
+## (heat stops smoothly as the level falls to @qcode{"minlevel"}, a
+## low-level trip), so a tank run dry while heated keeps a bounded
+## temperature.
 ##
 ## Options:
 ## @table @asis
@@ -16,6 +17,8 @@
 ## largest duty (W), default Inf.
 ## @item @qcode{"lag"}
 ## first-order lag of the element (s), default 0 (none).
+## @item @qcode{"minlevel"}
+## level (m) below which the heater is tripped, default 0.05 m.
 ## @end table
 ##
 ## The heat actually delivered is reported as @code{res.NAME.duty}.  A
@@ -40,7 +43,7 @@ function net = vn_heater (net, name, tank, varargin)
     error ("Octave:invalid-input-arg",
            "%s: heater \"%s\": TANK must name a tank of the network", fn, name);
   endif
-  o = loop_options (varargin, {"duty", "max", "lag"}, fn, name);
+  o = loop_options (varargin, {"duty", "max", "lag", "minlevel"}, fn, name);
   par = struct ();
   if (isfield (o, "duty"))
     par.duty = loop_scalar (o.duty, "duty", name, fn, false);
@@ -59,6 +62,14 @@ function net = vn_heater (net, name, tank, varargin)
       error ("Octave:invalid-input-arg",
              "%s: heater \"%s\": LAG must be >= 0 (s), got %g", fn, name,
              par.lag);
+    endif
+  endif
+  if (isfield (o, "minlevel"))
+    par.minlevel = loop_scalar (o.minlevel, "minlevel", name, fn, false);
+    if (par.minlevel < 0)
+      error ("Octave:invalid-input-arg",
+             "%s: heater \"%s\": MINLEVEL must be >= 0 (m), got %g", fn,
+             name, par.minlevel);
     endif
   endif
   net = loop_append (net, name, "heater", par, struct ());

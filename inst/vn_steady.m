@@ -273,6 +273,9 @@ function op = operating_point (net, x, y, states)
     op.(un.name) = r;
     k = s.(un.kind);
     for j = find (k.isinput)
+      if (! isfield (r, k.params{j}))
+        continue;   # a property slot the network does not carry
+      endif
       v = r.(k.params{j});
       if (! isnan (v))
         names{end+1, 1} = [un.name "." k.params{j}];

@@ -31,6 +31,11 @@ function q = vn_quantity (net, name, what, caller)
   q.uname = uname;
   q.kind = kind;
   q.var = var;
+  ## a declared species is carried in the core's slot c<k>
+  ks = find (strcmp (net.options.species, var), 1);
+  if (! isempty (ks) && any (strcmp (kind, {"tank", "feed", "boundary"})))
+    var = sprintf ("c%d", ks);
+  endif
   switch (what)
     case {"input", "param"}
       slot = find (strcmp (k.params, var), 1);

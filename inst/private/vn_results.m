@@ -65,4 +65,5 @@ function res = vn_results (net, t, X, Y, states, u)
   res.x = X;
   res.states = states;
   res.units = units;
+  res = vn_props_names (net, res);
 endfunction

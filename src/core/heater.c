@@ -1,19 +1,21 @@
 /* Heater: a heat input (W) into a tank's energy balance, an input that
  * signals and controllers may drive, limited to "max", with an optional
  * first-order lag of the element (d(Q)/dt = (duty - Q) / lag).  Heat
- * reaches the liquid only while the element is covered: a smooth gate on
- * the level over the network's band, so a tank run dry while heated keeps
- * a bounded temperature (low-level trips are common practice). */
+ * reaches the liquid only while the level stands above "minlevel" (the
+ * element covered; a low-level trip there is common practice): a smooth
+ * gate over ten times the network's band, so a tank run dry while heated
+ * keeps a bounded temperature. */
 #include <math.h>
 #include "smooth.h"
 #include "vn_internal.h"
 
-enum { DUTY, MAX, LAG, NPAR };
+enum { DUTY, MAX, LAG, MINLEVEL, NPAR };
 
 static const vn_param_info par[NPAR] = {
   {"duty", 0, -1e12, 1e12, "W", VN_P_INPUT},
   {"max", INFINITY, 0, 1e12, "W", VN_P_INF},
   {"lag", 0, 0, 1e6, "s", 0},
+  {"minlevel", 0.05, 0, 1e5, "m", 0},
 };
 static const char *const out[] = {"duty"};
 static const char *const ounit[] = {"W"};
@@ -89,10 +91,12 @@ static double heat (vn_net *net, vn_unit *u, const vn_node *t,
       Q = command (net, u, &d);
       vn_lf_p (&dq, vn_pcol (u, DUTY), d);
     }
-  double dg, g = vn_gate (t->level, net->smooth, &dg);
+  double lmin = net->p[u->poff + MINLEVEL];
+  double dg, g = vn_gate (t->level - lmin, 10 * net->smooth, &dg);
   vn_lf_axpy (dQ, g, &dq);
   vn_lf_axpy (dQ, Q * dg, &t->dH);
   vn_lf_p (dQ, t->pc_base, -Q * dg);
+  vn_lf_p (dQ, vn_pcol (u, MINLEVEL), -Q * dg);
   u->q = Q * g;
   return Q * g;
 }
