@@ -212,16 +212,8 @@ function [net, pnet, x, opstates] = open_loops (net, pnet, x, op)
   endfor
   x = x(keep);
   opstates = names(keep);
-  pnet = drop_units (pnet, drop);
-  net = drop_units (net, drop);
-endfunction
-
-function net = drop_units (net, drop)
-  net.units(drop) = [];
-  net.index = struct ();
-  for i = 1:numel (net.units)
-    net.index.(net.units(i).name) = i;
-  endfor
+  pnet = vn_drop_units (pnet, drop);
+  net = vn_drop_units (net, drop);
 endfunction
 
 ## A string or cell array of strings, as a row cell.

@@ -72,6 +72,10 @@
 ## or @qcode{"klu"}.
 ## @item @qcode{"simulate"}
 ## false: no simulation fallback (default true).
+## @item @qcode{"freeze"}
+## true: hold every on/off switch at the output it starts with (a network
+## with switches cycles and has no single steady state; without this
+## option vn_steady says so).
 ## @item @qcode{"verbose"}
 ## print iterations, method and residual.
 ## @end table
@@ -93,8 +97,14 @@ function op = vn_steady (net, varargin)
   [ovr, opt] = parse_args (net, varargin);
   ## inputs at other values
   for i = 1:numel (ovr)
-    net.units(ovr(i).q.unit).par.(ovr(i).q.var) = ovr(i).value;
+    q = ovr(i).q;
+    if (any (strcmp (net.options.species, q.var)))
+      net.units(q.unit).aux.species.(q.var) = ovr(i).value;
+    else
+      net.units(q.unit).par.(q.var) = ovr(i).value;
+    endif
   endfor
+  net = freeze_switches (net, opt.freeze);
   [padj, ytgt, tval, qadj] = inverse_problem (net, opt);
   x0 = start_state (opt.initial);
   pk = vn_pack (net);
@@ -128,7 +138,7 @@ endfunction
 function [ovr, opt] = parse_args (net, args)
   opt = struct ("target", {{}}, "adjust", {{}}, "initial", [],
                 "maxiter", 60, "tol", 1e-10, "solver", 0, "simulate", true,
-                "verbose", false);
+                "verbose", false, "freeze", false);
   ovr = struct ("q", {}, "value", {});
   if (mod (numel (args), 2) != 0)
     error ("Octave:invalid-input-arg",
@@ -190,7 +200,7 @@ function [ovr, opt] = parse_args (net, args)
                  "vn_steady: option \"solver\" must be \"auto\", \"dense\" or \"klu\"");
         endif
         opt.solver = j - 1;
-      case {"simulate", "verbose"}
+      case {"simulate", "verbose", "freeze"}
         if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
           error ("Octave:invalid-input-arg",
                  "vn_steady: option \"%s\" must be true or false", lower (name));
@@ -198,7 +208,7 @@ function [ovr, opt] = parse_args (net, args)
         opt.(lower (name)) = logical (val);
       otherwise
         error ("Octave:invalid-input-arg",
-               "vn_steady: unknown option \"%s\"; allowed: target, adjust, initial, maxiter, tol, solver, simulate, verbose, or an input quantity \"UNIT.VARIABLE\"",
+               "vn_steady: unknown option \"%s\"; allowed: target, adjust, initial, maxiter, tol, solver, simulate, freeze, verbose, or an input quantity \"UNIT.VARIABLE\"",
                name);
     endswitch
   endfor
@@ -251,6 +261,28 @@ function x0 = start_state (init)
     error ("Octave:invalid-input-arg",
            "vn_steady: option \"initial\" must be an operating point from vn_steady or a state vector");
   endif
+endfunction
+
+## Switches cycle: refuse, or hold each at the output it starts with.
+function net = freeze_switches (net, freeze)
+  sw = find (strcmp ({net.units.kind}, "switch"));
+  if (isempty (sw))
+    return;
+  endif
+  names = {net.units(sw).name};
+  if (! freeze)
+    error ("vesselnet:no-steady-state",
+           "vn_steady: switch %s turns its input on and off, so the network has no single steady state; give \"freeze\", true to hold each switch at the output it starts with",
+           strjoin (strcat ("\"", names, "\""), ", "));
+  endif
+  r0 = vn_simulate (net, [0 1e-6], "record", strcat (names, ".output"));
+  for j = 1:numel (sw)
+    q = net.units(sw(j)).aux.manipulate;
+    dot = find (q == ".", 1);
+    tu = q(1:dot-1);
+    net.units(net.index.(tu)).par.(q(dot+1:end)) = r0.(names{j}).output(1);
+  endfor
+  net = vn_drop_units (net, sw);
 endfunction
 
 ## The result struct: unit fields as scalars, inputs, spilling tanks.
@@ -365,6 +397,20 @@ endfunction
 %! assert (op.T1.level, 2.25, 1e-9);
 %! assert (op.net.units(3).par.flow, 0.015, 1e-10);
 
+%!test
+%! ## a sump under a level switch has no single steady state unless the
+%! ## switch is frozen (invented data)
+%! net = vn_network ("sump");
+%! net = vn_tank (net, "S1", "area", 2, "level", 0.5);
+%! net = vn_feed (net, "F1", "S1", "flow", 0.004);
+%! net = vn_orifice (net, "O1", "S1", "", "coeff", 0.002);
+%! net = vn_pump (net, "P1", "S1", "", "flow", 0.01, "speed", 0);
+%! net = vn_switch (net, "LS1", "measure", "S1.level", "manipulate", ...
+%!                  "P1.speed", "on", 1.5, "off", 0.5);
+%! fail ("vn_steady (net)", "no single steady state");
+%! op = vn_steady (net, "freeze", true);
+%! ## pump held off: the orifice passes the feed, h = (F/c)^2
+%! assert (op.S1.level, (0.004 / 0.002)^2, 1e-8);
 %!error <2 target\(s\) but 1 adjusted>
 %! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
 %!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);

@@ -10,8 +10,8 @@ double vn_measure (vn_net *net, const vn_unit *u, const double *x,
                    vn_lf *dm)
 {
   vn_unit *m = &net->u[u->ref[0]];
-  double y[8];
-  vn_lf dy[8];
+  double y[VN_NOUTMAX];
+  vn_lf dy[VN_NOUTMAX];
   for (int j = 0; j < m->k->nout; j++)
     dy[j].n = 0;
   m->k->outputs (net, m, &net->nd[u->ref[0]], x, y, dm ? dy : NULL);
@@ -28,7 +28,7 @@ int vn_check_loop_refs (vn_net *net, vn_unit *u)
                          "(unit %d, output %d given)", mu, mo);
   if (mu == self)
     return vn_fail_unit (net, u, "it cannot measure its own output");
-  if (net->u[mu].k->nout > 8)
+  if (net->u[mu].k->nout > VN_NOUTMAX)
     return vn_fail_unit (net, u, "measured unit has too many outputs");
   if (cu < 0 || cu >= net->nu || cp < 0 || cp >= net->u[cu].k->npar
       || !(net->u[cu].k->par[cp].flags & VN_P_INPUT))

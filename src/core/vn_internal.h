@@ -9,6 +9,7 @@
 
 #define VN_NPMAX 32       /* parameter slots per unit */
 #define VN_NSP 8          /* species a network may carry */
+#define VN_NOUTMAX 16     /* outputs of one unit */
 #define VN_LF 24          /* entries of one derivative linear form */
 #define VN_NAMELEN 64
 
