@@ -136,3 +136,13 @@ if (demo_have ("vn_plot"))
   printf ("  %s\n", files{:});
 endif
 printf ("\nAll figures come from an invented model: validate a model against plant data\nand have any tuning reviewed before it is used on a live works.\n");
+
+## ---- energy and species (heated buffer, contact tank) ----------------
+try
+  out = demo_outdir (fullfile (here, "output"));
+  more_files = thermal (out);
+  printf ("\nPictures written:\n");
+  printf ("  %s\n", more_files{:});
+catch err
+  printf ("thermal demo failed: %s\n", err.message);
+end_try_catch
