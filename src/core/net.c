@@ -72,6 +72,9 @@ static int check_value (vn_net *net, vn_unit *u, int slot, double v)
   if (isinf (v) && !(pi->flags & VN_P_INF))
     return vn_fail_unit (net, u, "%s must be finite (%s), got %g",
                          pi->name, pi->unit, v);
+  /* the infinity that is the default (no integral, no limit) is allowed */
+  if (isinf (v) && v == pi->def)
+    return VN_OK;
   if (v < pi->lo || v > pi->hi)
     return vn_fail_unit (net, u, "%s must lie in [%g, %g] (%s), got %g",
                          pi->name, pi->lo, pi->hi, pi->unit, v);
