@@ -71,6 +71,7 @@ static void own (vn_net *net, vn_unit *u, const double *x, double *f,
     {
       vn_lf_x (&df[0], u->xoff, -1 / lag);
       vn_lf_p (&df[0], vn_pcol (u, DUTY), d / lag);
+      vn_lf_p (&df[0], vn_pcol (u, MAX), (1 - d) / lag);
       vn_lf_p (&df[0], vn_pcol (u, LAG), -f[u->xoff] / lag);
     }
 }
@@ -90,6 +91,7 @@ static double heat (vn_net *net, vn_unit *u, const vn_node *t,
     {
       Q = command (net, u, &d);
       vn_lf_p (&dq, vn_pcol (u, DUTY), d);
+      vn_lf_p (&dq, vn_pcol (u, MAX), 1 - d);
     }
   double lmin = net->p[u->poff + MINLEVEL];
   double dg, g = vn_gate (t->level - lmin, 10 * net->smooth, &dg);
