@@ -444,6 +444,8 @@ static void after_build (void)
   vn_net_free (net);
 }
 
+static void loops_heaters_species (void);
+
 int main (void)
 {
   network_level ();
@@ -452,5 +454,158 @@ int main (void)
   links ();
   feeds_boundaries ();
   after_build ();
+  loops_heaters_species ();
   return vt_done ();
+}
+
+/* ---- controllers, switches, heaters, species count ---- */
+
+/* T1 with a valve out, and a controller or switch kind on T1.level
+ * driving V1.opening (refs overridable by the caller). */
+static int looped (vt_net *b, const char *kind, const char *name)
+{
+  base (b);
+  int v = vt_unit (b, "valve", "V1", 0, -1);
+  vt_set (b, v, "kv", 10);
+  vt_set (b, v, "opening", 0.5);
+  int c = vt_unit (b, kind, name, 0, 0);   /* T1, output "level" */
+  b->ref[4 * c + 2] = v;
+  b->ref[4 * c + 3] = vt_slot (b->kind[v], "opening");
+  if (strcmp (kind, "controller") == 0)
+    {
+      vt_set (b, c, "setpoint", 1);
+      vt_set (b, c, "gain", 0.5);
+    }
+  else
+    {
+      vt_set (b, c, "on", 2);
+      vt_set (b, c, "off", 1);
+    }
+  return c;
+}
+
+static void loops_heaters_species (void)
+{
+  vt_net b;
+  int c;
+
+  /* controller.c */
+  c = looped (&b, "controller", "LC");
+  b.given[c * vn_npmax () + vt_slot (b.kind[c], "setpoint")] = 0;
+  refuse ("controller without setpoint", &b, "LC", "setpoint", "required");
+  c = looped (&b, "controller", "LC");
+  b.given[c * vn_npmax () + vt_slot (b.kind[c], "gain")] = 0;
+  refuse ("controller without gain", &b, "LC", "gain", "required");
+  c = looped (&b, "controller", "LC");
+  vt_set (&b, c, "gain", 0);
+  refuse ("controller gain 0", &b, "LC", "gain", "must not be 0");
+  c = looped (&b, "controller", "LC");
+  vt_set (&b, c, "lo", 0.8);
+  vt_set (&b, c, "hi", 0.2);
+  refuse ("controller lo above hi", &b, "LC", "lo < hi", "[0.8 0.2]");
+  c = looped (&b, "controller", "FC");
+  b.ref[4 * c] = 2;   /* measures V1.flow */
+  vt_set (&b, c, "filter", 0);
+  refuse ("controller on a flow with filter 0", &b, "FC", "filter > 0",
+          "\"V1\"");
+
+  /* loop.c, through a controller and a switch */
+  c = looped (&b, "controller", "LC");
+  b.ref[4 * c] = 1;   /* O1 has one output */
+  b.ref[4 * c + 1] = 2;
+  vt_set (&b, c, "filter", 1);
+  refuse ("measure names no output of O1", &b, "LC", "measure",
+          "unit 1, output 2");
+  c = looped (&b, "switch", "LS");
+  b.ref[4 * c] = -1;
+  refuse ("switch measuring nothing", &b, "LS", "measure", "unit -1");
+  c = looped (&b, "controller", "LC");
+  b.ref[4 * c] = c;
+  refuse ("controller measuring itself", &b, "LC", "its own output", NULL);
+  c = looped (&b, "controller", "LC");
+  b.ref[4 * c + 3] = vt_slot (b.kind[2], "kv");
+  refuse ("manipulating valve kv (not an input)", &b, "LC", "manipulate",
+          "input");
+  c = looped (&b, "switch", "LS");
+  b.ref[4 * c + 2] = -1;
+  refuse ("switch manipulating nothing", &b, "LS", "manipulate", "input");
+  c = looped (&b, "controller", "LC");
+  b.ref[4 * c + 2] = c;
+  b.ref[4 * c + 3] = vt_slot (b.kind[c], "setpoint");
+  refuse ("controller driving its own setpoint", &b, "LC",
+          "its own setpoint", NULL);
+  c = looped (&b, "controller", "LC");
+  {
+    int s = vt_unit (&b, "switch", "LS", 0, 0);
+    b.ref[4 * s + 2] = 2;
+    b.ref[4 * s + 3] = vt_slot (b.kind[2], "opening");
+    vt_set (&b, s, "on", 2);
+    vt_set (&b, s, "off", 1);
+  }
+  refuse ("two units driving V1.opening", &b, "LS", "V1.opening",
+          "already driven by \"LC\"");
+
+  /* switch.c */
+  c = looped (&b, "switch", "LS");
+  b.given[c * vn_npmax () + vt_slot (b.kind[c], "off")] = 0;
+  refuse ("switch without off", &b, "LS", "on and off", "required");
+  c = looped (&b, "switch", "LS");
+  vt_set (&b, c, "off", 2);
+  refuse ("switch with on = off", &b, "LS", "equal", "(2)");
+
+  /* heater.c */
+  base (&b);
+  c = vt_unit (&b, "heater", "H1", -1, 0);
+  refuse ("heater in a network that is not thermal", &b, "H1", "thermal",
+          NULL);
+  base (&b);
+  b.spec.thermal = 1;
+  c = vt_unit (&b, "heater", "H1", -1, 1);
+  refuse ("heater on an orifice", &b, "H1", "heat a tank", NULL);
+  base (&b);
+  b.spec.thermal = 1;
+  c = vt_unit (&b, "heater", "H1", -1, -1);
+  refuse ("heater on nothing", &b, "H1", "heat a tank", NULL);
+  {
+    vn_net *net = NULL;
+    base (&b);
+    b.spec.thermal = 1;
+    c = vt_unit (&b, "heater", "H1", -1, 0);
+    vt_set (&b, c, "lag", 20);
+    int st = vt_build (&b, &net);
+    VT_CHECK (st == VN_OK, "heater with lag 20 s builds (%s)",
+              st ? b.msg : "ok");
+    if (st == VN_OK)
+      {
+        int pl = vt_pidx (&b, net, c, "lag");
+        st = vn_param_set (net, pl, 0);
+        VT_CHECK (st == VN_EARG && has (vn_errmsg (net), "H1", "lag",
+                                        "got 0")
+                  && vn_param_get (net, pl) == 20,
+                  "lag set to 0 on a lagged heater refused, kept %g: "
+                  "\"%s\"", vn_param_get (net, pl), vn_errmsg (net));
+      }
+    vn_net_free (net);
+  }
+
+  /* the species count limit in net.c: 8 species at most */
+  {
+    static const double decay[9] = {0};
+    base (&b);
+    b.spec.nspecies = 9;
+    b.spec.decay = decay;
+    refuse ("9 species", &b, "network", "between 0 and 8", "got 9");
+    base (&b);
+    b.spec.nspecies = -1;
+    refuse ("-1 species", &b, "network", "species", "got -1");
+    vn_net *net = NULL;
+    base (&b);
+    b.spec.nspecies = 8;
+    b.spec.decay = decay;
+    int st = vt_build (&b, &net);
+    VT_CHECK (st == VN_OK && vn_nstates (net) == 9, "8 species build: "
+              "status %d, %d states (want 9)", st,
+              net ? vn_nstates (net) : -1);
+    vn_net_free (net);
+  }
 }
