@@ -122,12 +122,12 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
         u->k->node (net, u, x, &net->nd[i]);
     }
   /* controllers and switches set the inputs they drive */
-  for (int i = 0; i < net->nu; i++)
+  for (int i = 0; i < net->nu && net->nloop; i++)
     if (net->u[i].k->pre)
       net->u[i].k->pre (net, &net->u[i], x);
   /* own dynamics and element flows; controllers' own states last, once
    * the flows they may measure are known */
-  for (int pass = 0; pass < 2; pass++)
+  for (int pass = 0; pass < 1 + (net->nloop > 0); pass++)
   for (int i = 0; i < net->nu; i++)
     {
       vn_unit *u = &net->u[i];

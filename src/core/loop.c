@@ -1,5 +1,6 @@
 /* What controllers and switches share: reading the measured quantity
  * and claiming the input they drive. */
+#include <math.h>
 #include <stdlib.h>
 #include "vn_internal.h"
 
@@ -13,7 +14,10 @@ double vn_measure (vn_net *net, const vn_unit *u, const double *x,
   double y[VN_NOUTMAX];
   vn_lf dy[VN_NOUTMAX];
   for (int j = 0; j < m->k->nout; j++)
-    dy[j].n = 0;
+    {
+      dy[j].n = 0;
+      y[j] = NAN;   /* outputs the network does not carry */
+    }
   m->k->outputs (net, m, &net->nd[u->ref[0]], x, y, dm ? dy : NULL);
   vn_lf_axpy (dm, 1, &dy[u->ref[1]]);
   return y[u->ref[1]];
@@ -37,6 +41,12 @@ int vn_check_loop_refs (vn_net *net, vn_unit *u)
                          "heater duty or controller setpoint)");
   if (cu == self)
     return vn_fail_unit (net, u, "it cannot manipulate its own setpoint");
+  /* a cascade's inner (slave) controller reads the setpoint the outer
+   * one writes, so the outer must act first: declared first */
+  if (net->u[cu].k->pre && cu < self)
+    return vn_fail_unit (net, u, "it drives the setpoint of \"%s\", "
+                         "declared before it; declare the outer (master) "
+                         "controller first", net->u[cu].name);
   int pidx = net->u[cu].poff + cp;
   if (!net->override)
     {

@@ -189,8 +189,11 @@ static int setup_units (vn_net *net, const vn_spec *s)
           u->ntab = s->tablen[i];
           tpos += s->tablen[i];
         }
+      /* controllers and switches hold an output index in ref[1] and a
+       * parameter slot in ref[3]; their kind checks those */
       for (int j = 0; j < 4; j++)
-        if (u->ref[j] < -1 || u->ref[j] >= s->nunit)
+        if (!(u->k->pre && (j == 1 || j == 3))
+            && (u->ref[j] < -1 || u->ref[j] >= s->nunit))
           return vn_fail_unit (net, u, "reference %d is %d, outside the "
                                "network's %d units", j + 1, u->ref[j],
                                s->nunit);
@@ -219,11 +222,17 @@ static int setup_layout (vn_net *net)
     }
   net->nx = nx;
   net->ny = ny;
+  for (int i = 0; i < net->nu; i++)
+    net->nloop += net->u[i].k->pre != NULL;
   net->nd = calloc ((size_t) (net->nu > 0 ? net->nu : 1), sizeof *net->nd);
   net->dy = calloc ((size_t) (ny ? ny : 1), sizeof *net->dy);
   net->y = calloc ((size_t) (ny ? ny : 1), sizeof *net->y);
   if (!net->nd || !net->dy || !net->y)
     return VN_ENOMEM;
+  /* outputs a network does not carry (temperatures of a network that is
+   * not thermal, unused species slots) stay NaN: kinds skip them */
+  for (int i = 0; i < ny; i++)
+    net->y[i] = NAN;
   return VN_OK;
 }
 

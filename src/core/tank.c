@@ -394,8 +394,11 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
   nd->area = 1 / dldV;
   nd->pc_base = vn_pcol (u, BASE);
   nd->xV = u->xoff;
+  nd->xE = nd->xM0 = nd->pcT = nd->pcc0 = -1;
+  nd->T = NAN;
   /* carried properties from the contents: T = E/V, c = M/V, held as the
    * volume falls below VMIN so an empty tank keeps a finite value */
+  if (net->thermal || net->nspecies)
   {
     double Ve = V > VMIN ? V : VMIN;
     int j = u->xoff + 1;
@@ -503,9 +506,11 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
   y[1] = nd->V;
   y[2] = nd->H;
   y[3] = u->q;
-  y[4] = nd->T;
-  for (int k = 0; k < VN_NSP; k++)
-    y[5 + k] = k < net->nspecies ? nd->c[k] : NAN;
+  /* temperature and species only when carried (else NaN, set once) */
+  if (net->thermal)
+    y[4] = nd->T;
+  for (int k = 0; k < net->nspecies; k++)
+    y[5 + k] = nd->c[k];
   if (!dy)
     return;
   if (net->thermal)

@@ -152,6 +152,7 @@ struct vn_net {
   double *y;        /* per output */
   vn_trip jx, jp, yx, yp;
   int want_d;       /* this evaluation wants derivatives */
+  int nloop;        /* controllers and switches (units with a pre pass) */
   double *fwork;    /* nx: balances when the caller wants outputs only */
   /* sparse pattern of df/dx */
   long nnz;
