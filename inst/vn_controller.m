@@ -40,6 +40,10 @@
 ## derivative filter as a fraction of Td (default 0.1).
 ## @end table
 ##
+## In a cascade, declare the outer (master) controller before the inner
+## one whose setpoint it drives: the inner controller reads that setpoint
+## within the same evaluation.
+##
 ## The controller's output is reported as @code{res.NAME.output}, with
 ## @code{res.NAME.measurement} and @code{res.NAME.error}.  Settings must be
 ## reviewed before they reach a live loop: a model's tuning is a starting

@@ -158,6 +158,23 @@ static void pre (vn_net *net, vn_unit *u, const double *x)
       vn_lf_axpy (&du, -s * Kc / a, &dm);
       vn_lf_x (&du, xz, s * Kc / a);
     }
+  /* the settings as parameters (tuning studies, fits) */
+  {
+    double dKc = e;
+    if (xi >= 0)
+      {
+        dKc += x[xi] / Ti;
+        vn_lf_p (&du, vn_pcol (u, RESET), -Kc * x[xi] / (Ti * Ti));
+      }
+    if (xz >= 0)
+      {
+        dKc += -s * (m - x[xz]) / a;
+        vn_lf_p (&du, vn_pcol (u, ALPHA), s * Kc * (m - x[xz]) / (a * a));
+      }
+    vn_lf_p (&du, vn_pcol (u, GAIN), dKc);
+    if (vn_given (net, u, BIAS))
+      vn_lf_p (&du, vn_pcol (u, BIAS), 1);
+  }
   double lo = net->p[u->poff + LO], hi = net->p[u->poff + HI];
   double uu = ur < lo ? lo : ur > hi ? hi : ur;
   vn_lf_scale (&du, (ur < lo || ur > hi) ? 0.0 : 1.0);
