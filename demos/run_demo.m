@@ -146,3 +146,10 @@ try
 catch err
   printf ("thermal demo failed: %s\n", err.message);
 end_try_catch
+
+## ---- fitting step tests and tuning a level loop (fit_and_tune.m) -------
+try
+  fit_and_tune (demo_outdir (fullfile (here, "output")));
+catch err
+  printf ("fit_and_tune failed: %s\n", err.message);
+end_try_catch

@@ -170,6 +170,17 @@ function s = shown (v)
   endif
 endfunction
 
+%!demo
+%! ## Invented data: a feed step recorded at uneven times, one sample lost
+%! t = [0 30 55 90 120 160 200 260 330 400];
+%! u = [4 4 4 6 6 6 6 6 6 6] * 1e-3;        # m3/s, stepped at 90 s
+%! y = [1.00 1.00 1.01 1.02 NaN 1.08 1.12 1.17 1.22 1.26];
+%! ex = vn_experiment (t, "F1.flow", u, "T1.level", y, "hold", true,
+%!                     "sigma", 0.005, "name", "feed step (invented)")
+%! ## a second test joins the first as a struct array for vn_fit
+%! both = [ex, vn_experiment(t, "F1.flow", u, "T1.level", y)];
+%! size (both)
+
 %!test
 %! t = (0:10:100).';
 %! ex = vn_experiment (t, "F1.flow", 0.01 * ones (11, 1), "T2.level",
@@ -211,3 +222,23 @@ endfunction
 %!error <either "sigma" or "weights"> vn_experiment (0:2, "T1.level", 1:3, "sigma", 1, "weights", 1)
 %!error <no quantity given> vn_experiment (0:2, "hold", true)
 %!error <Invalid call> vn_experiment (0:2)
+
+%!test
+%! ## weights instead of sigma, kept per output; integer data converted
+%! ex = vn_experiment ([0 5 10], "F1.flow", int8 ([1 1 2]), "T1.level",
+%!                     [1 2 3], "T2.level", [4 5 6], "weights", [4 1]);
+%! assert (ex.weights, [4 1]);
+%! assert (isempty (ex.sigma));
+%! assert (class (ex.data), "double");
+%! assert (ex.data(:, 1), [1; 1; 2]);
+%! assert (ex.data(:, 3), [4; 5; 6]);
+
+%!error <T must be a real vector of sample times \(s\)> vn_experiment ("abc", "T1.level", 1:3)
+%!error <T must hold two or more> vn_experiment (5, "T1.level", 1)
+%!error <data of "T1.level" must be a real vector> vn_experiment (0:2, "T1.level", {1, 2, 3})
+%!error <"T1.level" holds Inf> vn_experiment (0:2, "T1.level", [1 Inf 3])
+%!error <option "sigma" must be positive finite> vn_experiment (0:2, "T1.level", 1:3, "sigma", -1)
+%!error <option "hold" must be true or false> vn_experiment (0:2, "T1.level", 1:3, "hold", "yes")
+%!error <option "name" must be a string> vn_experiment (0:2, "T1.level", 1:3, "name", 7)
+%!error <name/value pairs> vn_experiment (0:2, "T1.level", 1:3, "hold")
+%!error <argument 4 must be a quantity> vn_experiment (0:2, "T1.level", 1:3, 5, 1)

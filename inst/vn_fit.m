@@ -147,3 +147,154 @@ function [pq, p0] = resolve (net, params)
     p0(i) = v;
   endfor
 endfunction
+
+%!demo
+%! ## Invented data: a tank drained by an orifice, a feed step of +50 %
+%! ## recorded every 20 s with 3 mm of seeded noise; the model starts with
+%! ## the orifice coefficient twice too large.
+%! net = vn_network ("demo");
+%! net = vn_tank (net, "T1", "area", 1.5, "level", 1.0);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.004);
+%! net = vn_orifice (net, "O1", "T1", "", "coeff", 0.003);
+%! t = (0:20:3000).';
+%! op = vn_steady (net);
+%! res = vn_simulate (net, t, vn_signal ("F1.flow", "step", 300, 0.004, 0.006),
+%!                    "initial", op);
+%! randn ("state", 1);
+%! ex = vn_experiment (t, "F1.flow", 0.004 + 0.002 * (t >= 300), "T1.level",
+%!                     res.T1.level + 0.003 * randn (size (t)), "hold", true);
+%! start = vn_orifice (vn_tank (vn_feed (vn_network ("model"), "F1", "T1",
+%!                     "flow", 0.004), "T1", "area", 1.5, "level", 1.0),
+%!                     "O1", "T1", "", "coeff", 0.006);
+%! est = vn_fit (start, ex, {"O1.coeff"});
+%! printf ("O1.coeff %.5f, 95 %% interval [%.5f, %.5f] (truth 0.003)\n",
+%!         est.value, est.ci);
+%! vn_plot (est);
+
+## One tank T1 fed by F1 and drained freely by O1 (Torricelli law, flow
+## = coeff sqrt (level)); with T2 behind it through O2 for two levels.
+%!function net = one_tank (c, a)
+%!  net = vn_network ("fit check");
+%!  net = vn_tank (net, "T1", "area", a, "level", 1.0);
+%!  net = vn_feed (net, "F1", "T1", "flow", 0.004);
+%!  net = vn_orifice (net, "O1", "T1", "", "coeff", c);
+%!endfunction
+
+%!function net = two_tanks (c1, a2, l1 = 1.0, l2 = 0.8)
+%!  net = vn_network ("fit check");
+%!  net = vn_tank (net, "T1", "area", 1.5, "level", l1);
+%!  net = vn_tank (net, "T2", "area", a2, "level", l2);
+%!  net = vn_feed (net, "F1", "T1", "flow", 0.004);
+%!  net = vn_orifice (net, "O1", "T1", "T2", "coeff", c1);
+%!  net = vn_orifice (net, "O2", "T2", "", "coeff", 0.0025);
+%!endfunction
+
+## Levels of both tanks for a test from the declared levels of NET, the
+## feed held between samples.
+%!function y = levels_from (net, t, u)
+%!  sg = struct ("quantity", "F1.flow", "t", t, "v", u, "hold", true,
+%!               "kind", "table");
+%!  res = vn_simulate (net, t, sg, "reltol", 1e-10, "abstol", 1e-12);
+%!  y = [res.T1.level, res.T2.level];
+%!endfunction
+
+## Central differences of the weighted residuals, relative step 1e-5.
+%!function J = fd_jacobian (build, p, t, u, sigma)
+%!  J = [];
+%!  for i = 1:numel (p)
+%!    h = 1e-5 * p(i);
+%!    pp = p; pp(i) += h;
+%!    pm = p; pm(i) -= h;
+%!    d = levels_from (build (pp), t, u) - levels_from (build (pm), t, u);
+%!    J(:, i) = - d(:) / (2 * h) / sigma;
+%!  endfor
+%!endfunction
+
+%!shared t, u
+%! t = [0 10 25 40 60 90 130 180 240 300 400 550 700 900 1200 1500].';
+%! u = 0.004 + 0.002 * (t >= 90);
+
+%!test
+%! ## noise-free data: exact recovery (1e-6 relative) of O1.coeff 0.003
+%! ## and T1.area 1.5 from starts off by a factor of two both ways
+%! truth = one_tank (0.003, 1.5);
+%! sg = struct ("quantity", "F1.flow", "t", t, "v", u, "hold", true,
+%!              "kind", "table");
+%! res = vn_simulate (truth, t, sg, "initial", vn_steady (truth),
+%!                    "reltol", 1e-11, "abstol", 1e-13);
+%! ex = vn_experiment (t, "F1.flow", u, "T1.level", res.T1.level, "hold", true);
+%! est = vn_fit (one_tank (0.006, 0.75), ex, {"O1.coeff", "T1.area"},
+%!               "reltol", 1e-11, "abstol", 1e-13, "tol", 1e-10);
+%! assert (est.value, [0.003; 1.5], -1e-6);
+%! assert (est.rmse < 1e-6);
+%! ## steady start: 0.004 m3/s through O1 at 0.003 m2.5/s needs
+%! ## (0.004 / 0.003)^2 = 1.7778 m (Torricelli, any fluids text)
+%! assert (est.fit.predicted(1), (0.004 / 0.003) ^ 2, 1e-6);
+
+%!test
+%! ## "verbose": one line per iteration, each naming the sum of squares
+%! truth = one_tank (0.003, 1.5);
+%! sg = struct ("quantity", "F1.flow", "t", t, "v", u, "hold", true,
+%!              "kind", "table");
+%! res = vn_simulate (truth, t, sg, "initial", vn_steady (truth));
+%! ex = vn_experiment (t, "F1.flow", u, "T1.level", res.T1.level, "hold", true);
+%! out = evalc ("est = vn_fit (one_tank (0.006, 1.5), ex, {\"O1.coeff\"}, \"verbose\", true);");
+%! lines = strsplit (strtrim (out), "\n");
+%! assert (numel (lines), est.iterations);
+%! assert (est.iterations >= 2);
+%! assert (all (strncmp (lines, "vn_fit: iteration", 17)));
+%! assert (all (! cellfun ("isempty", strfind (lines, "sum of squares"))));
+%! ## quiet by default
+%! assert (evalc ("vn_fit (one_tank (0.006, 1.5), ex, {\"O1.coeff\"});"), "");
+
+%!test
+%! ## "declared" start: the test starts from the levels on the network
+%! ## (1.0 and 0.8 m, not a steady state); sensitivities from the core
+%! ## against central differences of the residuals, 1e-4 relative
+%! sigma = 0.01;
+%! y = levels_from (two_tanks (0.003, 1.0), t, u);
+%! ex = vn_experiment (t, "F1.flow", u, "T1.level", y(:, 1), "T2.level",
+%!                     y(:, 2), "hold", true, "sigma", sigma,
+%!                     "start", "declared");
+%! est = vn_fit (two_tanks (0.004, 0.8), ex, {"O1.coeff", "T2.area"});
+%! assert (est.value, [0.003; 1.0], -1e-4);
+%! assert (est.fit.predicted(1, :), [1.0, 0.8], 1e-9);
+%! Jfd = fd_jacobian (@(p) two_tanks (p(1), p(2)), est.value, t, u, sigma);
+%! err = max (abs (est.jacobian - Jfd)) ./ max (abs (Jfd));
+%! assert (all (err < 1e-4));
+%! assert (max (abs (Jfd(:))) > 1);
+
+%!test
+%! ## "measured" start: levels from the first samples (1.1 and 0.7 m),
+%! ## not the 1.0 and 0.8 m declared on the model; sensitivities against
+%! ## central differences, 1e-4 relative
+%! sigma = 0.01;
+%! ref = two_tanks (0.003, 1.0, 1.1, 0.7);
+%! y = levels_from (ref, t, u);
+%! ex = vn_experiment (t, "F1.flow", u, "T1.level", y(:, 1), "T2.level",
+%!                     y(:, 2), "hold", true, "sigma", sigma,
+%!                     "start", "measured");
+%! est = vn_fit (two_tanks (0.004, 0.8), ex, {"O1.coeff", "T2.area"});
+%! assert (est.value, [0.003; 1.0], -1e-4);
+%! assert (est.fit.predicted(1, :), [1.1, 0.7], 1e-9);
+%! build = @(p) two_tanks (p(1), p(2), 1.1, 0.7);
+%! Jfd = fd_jacobian (build, est.value, t, u, sigma);
+%! err = max (abs (est.jacobian - Jfd)) ./ max (abs (Jfd));
+%! assert (all (err < 1e-4));
+
+%!shared ex
+%! ex = vn_experiment (0:10, "F1.flow", 0.004 * ones (1, 11), "T1.level",
+%!                     ones (1, 11));
+%!error <Invalid call> vn_fit (one_tank (0.003, 1.5), ex)
+%!error <NET must be a network made by vn_network> vn_fit (struct ("a", 1), ex, {"O1.coeff"})
+%!error <EX must be one or more tests made by vn_experiment> vn_fit (one_tank (0.003, 1.5), struct ("t", 1), {"O1.coeff"})
+%!error <PARAMS must name the parameters> vn_fit (one_tank (0.003, 1.5), ex, {})
+%!error <PARAMS must name the parameters> vn_fit (one_tank (0.003, 1.5), ex, 3)
+%!error <names a parameter twice: O1.coeff, O1.coeff> vn_fit (one_tank (0.003, 1.5), ex, {"O1.coeff", "O1.coeff"})
+%!error <unknown option "iterations"> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "iterations", 5)
+%!error <options come in name/value pairs> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "verbose")
+%!error <"maxiter" must be a positive integer> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "maxiter", 0.5)
+%!error <"tol" must lie in \(0, 1\)> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "tol", 2)
+%!error <"lower" must be a scalar or 1 bounds> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", [1 2])
+%!error <0 <= lower < upper> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", 1, "upper", 0.5)
+%!error <"verbose" must be true or false> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "verbose", "yes")

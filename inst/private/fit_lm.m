@@ -36,6 +36,7 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
     endwhile
     if (! accepted)
       reason = "no step lowers the sum of squares (at the minimum to working precision)";
+      it -= 1;                          # a failed search is no iteration
       break;
     endif
     dtheta = norm (tn - theta, Inf);
