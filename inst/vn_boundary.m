@@ -1,5 +1,6 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{net} =} vn_boundary (@var{net}, @var{name}, @qcode{"head"}, @var{h}, @dots{})
+## @deftypefn  {} {@var{net} =} vn_boundary (@var{net}, @var{name}, @qcode{"head"}, @var{h}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_boundary (@var{net}, @{@var{name1}, @dots{}@}, @qcode{"head"}, @var{h}, @dots{})
 ## Add a fixed-head boundary (a river, a reservoir, a main) to the network.
 ##
 ## A boundary holds its head @var{h}, m (an input that signals may drive),
@@ -7,6 +8,10 @@
 ## @qcode{"head"} (required), @qcode{"temperature"} (degC, thermal networks)
 ## and one concentration per declared species, carried by any flow that
 ## leaves the boundary.
+##
+## Bulk form: given a cell array of names, one boundary is added per name
+## in one call, with the same checks and messages as one call each; each
+## option is a scalar or a vector of one value per boundary.
 ##
 ## @seealso{vn_network, vn_tank, vn_orifice, vn_pump}
 ## @end deftypefn
@@ -16,15 +21,27 @@ function net = vn_boundary (net, name, varargin)
     print_usage ();
   endif
   fn = "vn_boundary";
-  label = build_check_name (fn, net, "boundary", name);
+  build_check_net (fn, net);
   spec = [{"head", "real", "m", []}; build_material_spec(net)];
-  par = build_options (fn, label, varargin, spec);
+  if (iscell (name))
+    net = build_bulk (fn, "boundary", net, name, {}, {}, varargin, spec,
+                      @boundary_unit);
+  else
+    net = build_add_unit (net, boundary_unit (fn, net, name, {}, varargin,
+                                              spec));
+  endif
+endfunction
+
+## Check one boundary against NET and make its unit.
+function u = boundary_unit (fn, net, name, ~, args, spec)
+  label = build_check_name (fn, net, "boundary", name);
+  par = build_options (fn, label, args, spec);
   if (! isfield (par, "head"))
     build_error (fn, label, "HEAD (m) is required");
   endif
   build_check_thermal (fn, label, net, par, {"temperature"});
   [par, aux] = build_split_species (net, par, struct ());
-  net = build_add_unit (net, name, "boundary", "", "", par, [], aux);
+  u = build_unit (name, "boundary", "", "", par, [], aux);
 endfunction
 
 %!test

@@ -1,11 +1,17 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{net} =} vn_feed (@var{net}, @var{name}, @var{tank}, @qcode{"flow"}, @var{q}, @dots{})
+## @deftypefn  {} {@var{net} =} vn_feed (@var{net}, @var{name}, @var{tank}, @qcode{"flow"}, @var{q}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_feed (@var{net}, @{@var{name1}, @dots{}@}, @{@var{tank1}, @dots{}@}, @qcode{"flow"}, @var{q}, @dots{})
 ## Add a feed, a flow imposed into a tank from outside the network.
 ##
 ## The flow @var{q}, m3/s, is an input (signals may drive it; default 0);
 ## a negative flow is a draw-off.  The feed goes into the declared tank
 ## @var{tank}.  Options: @qcode{"flow"}, @qcode{"temperature"} (degC,
 ## thermal networks) and one concentration per declared species.
+##
+## Bulk form: given a cell array of names, one feed is added per name in
+## one call, with the same checks and messages as one call per feed;
+## @var{tank} is one name for all or a cell array of one per feed, and
+## each option a scalar or a vector of one value per feed.
 ##
 ## @seealso{vn_network, vn_tank, vn_signal}
 ## @end deftypefn
@@ -15,16 +21,29 @@ function net = vn_feed (net, name, tank, varargin)
     print_usage ();
   endif
   fn = "vn_feed";
+  build_check_net (fn, net);
+  spec = [{"flow", "real", "m3/s", []}; build_material_spec(net)];
+  if (iscell (name))
+    net = build_bulk (fn, "feed", net, name, {tank}, {"tank"}, varargin,
+                      spec, @feed_unit);
+  else
+    net = build_add_unit (net, feed_unit (fn, net, name, {tank}, varargin,
+                                          spec));
+  endif
+endfunction
+
+## Check one feed against NET and make its unit.
+function u = feed_unit (fn, net, name, fixed, args, spec)
+  tank = fixed{1};
   label = build_check_name (fn, net, "feed", name);
   if (ischar (tank) && strcmp (tank, name))
     build_error (fn, label, "TANK names the feed itself; give a declared tank");
   endif
   build_check_ref (fn, label, net, "TANK", tank, {"tank"});
-  spec = [{"flow", "real", "m3/s", []}; build_material_spec(net)];
-  par = build_options (fn, label, varargin, spec);
+  par = build_options (fn, label, args, spec);
   build_check_thermal (fn, label, net, par, {"temperature"});
   [par, aux] = build_split_species (net, par, struct ());
-  net = build_add_unit (net, name, "feed", "", tank, par, [], aux);
+  u = build_unit (name, "feed", "", tank, par, [], aux);
 endfunction
 
 %!test

@@ -20,13 +20,26 @@ function net = vn_orifice (net, name, from, to, varargin)
     print_usage ();
   endif
   fn = "vn_orifice";
-  label = build_check_name (fn, net, "orifice", name);
-  build_check_link (fn, label, net, from, to);
+  build_check_net (fn, net);
   spec = [{"coeff",    "positive", "m2.5/s", [];
            "cd",       "cd",       "",       [];
            "diameter", "positive", "m",      []};
           build_nozzle_spec()];
-  par = build_options (fn, label, varargin, spec);
+  if (iscell (name))
+    net = build_bulk (fn, "orifice", net, name, {from, to}, {"from", "to"},
+                      varargin, spec, @orifice_unit);
+  else
+    net = build_add_unit (net, orifice_unit (fn, net, name, {from, to},
+                                             varargin, spec));
+  endif
+endfunction
+
+## Check one orifice against NET and make its unit.
+function u = orifice_unit (fn, net, name, ends, args, spec)
+  [from, to] = ends{:};
+  label = build_check_name (fn, net, "orifice", name);
+  build_check_link (fn, label, net, from, to);
+  par = build_options (fn, label, args, spec);
   hasc = isfield (par, "coeff");
   hasd = isfield (par, "diameter");
   if (hasc && hasd)
@@ -42,7 +55,7 @@ function net = vn_orifice (net, name, from, to, varargin)
     par.cd = 0.61;  # sharp-edged orifice, common practice
   endif
   build_check_inlet (fn, label, to, par);
-  net = build_add_unit (net, name, "orifice", from, to, par, [], struct ());
+  u = build_unit (name, "orifice", from, to, par, [], struct ());
 endfunction
 
 %!test

@@ -30,15 +30,28 @@ function net = vn_pump (net, name, from, to, varargin)
     print_usage ();
   endif
   fn = "vn_pump";
-  label = build_check_name (fn, net, "pump", name);
-  build_check_link (fn, label, net, from, to);
+  build_check_net (fn, net);
   spec = [{"flow",    "nonneg",   "m3/s",       [];
            "shutoff", "positive", "m",          [];
            "k",       "positive", "m/(m3/s)^2", [];
            "speed",   "nonneg",   "",           [];
            "suction", "positive", "m",          []};
           build_nozzle_spec()];
-  par = build_options (fn, label, varargin, spec);
+  if (iscell (name))
+    net = build_bulk (fn, "pump", net, name, {from, to}, {"from", "to"},
+                      varargin, spec, @pump_unit);
+  else
+    net = build_add_unit (net, pump_unit (fn, net, name, {from, to},
+                                          varargin, spec));
+  endif
+endfunction
+
+## Check one pump against NET and make its unit.
+function u = pump_unit (fn, net, name, ends, args, spec)
+  [from, to] = ends{:};
+  label = build_check_name (fn, net, "pump", name);
+  build_check_link (fn, label, net, from, to);
+  par = build_options (fn, label, args, spec);
   fixed = isfield (par, "flow");
   curve = isfield (par, "shutoff") || isfield (par, "k");
   if (fixed && curve)
@@ -56,7 +69,7 @@ function net = vn_pump (net, name, from, to, varargin)
                  build_value_str (par.k));
   endif
   build_check_inlet (fn, label, to, par);
-  net = build_add_unit (net, name, "pump", from, to, par, [], struct ());
+  u = build_unit (name, "pump", from, to, par, [], struct ());
 endfunction
 
 %!test

@@ -15,15 +15,28 @@ function net = vn_resistance (net, name, from, to, varargin)
     print_usage ();
   endif
   fn = "vn_resistance";
+  build_check_net (fn, net);
+  spec = [{"r", "positive", "s/m2", []}; build_nozzle_spec()];
+  if (iscell (name))
+    net = build_bulk (fn, "resistance", net, name, {from, to}, {"from", "to"},
+                      varargin, spec, @resistance_unit);
+  else
+    net = build_add_unit (net, resistance_unit (fn, net, name, {from, to},
+                                                varargin, spec));
+  endif
+endfunction
+
+## Check one resistance against NET and make its unit.
+function u = resistance_unit (fn, net, name, ends, args, spec)
+  [from, to] = ends{:};
   label = build_check_name (fn, net, "resistance", name);
   build_check_link (fn, label, net, from, to);
-  spec = [{"r", "positive", "s/m2", []}; build_nozzle_spec()];
-  par = build_options (fn, label, varargin, spec);
+  par = build_options (fn, label, args, spec);
   if (! isfield (par, "r"))
     build_error (fn, label, "R (s/m2) is required");
   endif
   build_check_inlet (fn, label, to, par);
-  net = build_add_unit (net, name, "resistance", from, to, par, [], struct ());
+  u = build_unit (name, "resistance", from, to, par, [], struct ());
 endfunction
 
 %!test

@@ -1,6 +1,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{net} =} vn_tank (@var{net}, @var{name}, @var{option}, @var{value}, @dots{})
-## Add a well-mixed tank to the network.
+## @deftypefnx {} {@var{net} =} vn_tank (@var{net}, @{@var{name1}, @var{name2}, @dots{}@}, @var{option}, @var{value}, @dots{})
+## Add a well-mixed tank, or many tanks at once, to the network.
 ##
 ## The tank's state is its liquid volume; its level follows from the
 ## geometry and its head is @qcode{"base"} + level.  Options (SI units):
@@ -40,6 +41,14 @@
 ## Initial concentration of each species declared on the network.
 ## @end table
 ##
+## Bulk form: given a cell array of names, one tank is added per name in
+## one call, with the same checks and messages as one call per tank.  A
+## numeric option is then a scalar (for all tanks) or a vector of one value
+## per tank; @qcode{"shape"}, @qcode{"spill"} and @qcode{"table"} take one
+## value for all or a cell array of one per tank.  Large networks build
+## much faster this way, e.g.
+## @code{vn_tank (net, @{"T1", "T2", "T3"@}, "area", 2, "level", [1 2 3])}.
+##
 ## Geometry must be checked against the vessel drawings before the model
 ## is used to operate a plant.
 ##
@@ -51,9 +60,18 @@ function net = vn_tank (net, name, varargin)
     print_usage ();
   endif
   fn = "vn_tank";
-  label = build_check_name (fn, net, "tank", name);
-  shapes = {"prism", "horizontal", "sphere", "cone", "table"};
-  spec = [{"shape",        "choice",   "",   {"shape", shapes};
+  build_check_net (fn, net);
+  spec = tank_spec (net);
+  if (iscell (name))
+    net = build_bulk (fn, "tank", net, name, {}, {}, varargin, spec, @tank_unit);
+  else
+    net = build_add_unit (net, tank_unit (fn, net, name, {}, varargin, spec));
+  endif
+endfunction
+
+## Option rows of a tank (layout of build_options).
+function spec = tank_spec (net)
+  spec = [{"shape",        "choice",   "",   {"shape", tank_shapes()};
            "area",         "positive", "m2", [];
            "diameter",     "positive", "m",  [];
            "length",       "positive", "m",  [];
@@ -68,13 +86,22 @@ function net = vn_tank (net, name, varargin)
            "volume",       "nonneg",   "m3", [];
            "ua",           "nonneg",   "W/K", []};
           build_material_spec(net)];
-  [par, aux, given] = build_options (fn, label, varargin, spec);
+endfunction
+
+function shapes = tank_shapes ()
+  shapes = {"prism", "horizontal", "sphere", "cone", "table"};
+endfunction
+
+## Check one tank against NET and make its unit.
+function u = tank_unit (fn, net, name, ~, args, spec)
+  label = build_check_name (fn, net, "tank", name);
+  [par, aux, given] = build_options (fn, label, args, spec);
 
   table = [];
   if (! isfield (aux, "shape"))
     ## A strapping table says what the geometry is.
     aux.shape = ifelse (isfield (given, "table"), "table", "prism");
-    par.shape = find (strcmp (aux.shape, shapes)) - 1;
+    par.shape = find (strcmp (aux.shape, tank_shapes ())) - 1;
   endif
   if (isfield (given, "table"))
     table = double (given.table);
@@ -97,7 +124,7 @@ function net = vn_tank (net, name, varargin)
   endif
   build_check_thermal (fn, label, net, par, {"temperature", "ua"});
   [par, aux] = build_split_species (net, par, aux);
-  net = build_add_unit (net, name, "tank", "", to, par, table, aux);
+  u = build_unit (name, "tank", "", to, par, table, aux);
 endfunction
 
 ## Check which sizes the shape needs and allows; return the height of a

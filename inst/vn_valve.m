@@ -32,8 +32,7 @@ function net = vn_valve (net, name, from, to, varargin)
     print_usage ();
   endif
   fn = "vn_valve";
-  label = build_check_name (fn, net, "valve", name);
-  build_check_link (fn, label, net, from, to);
+  build_check_net (fn, net);
   chars = {"linear", "equal", "quick"};
   spec = [{"kv",             "positive", "m3/h", [];
            "opening",        "fraction", "",     [];
@@ -41,12 +40,26 @@ function net = vn_valve (net, name, from, to, varargin)
            "rangeability",   "above1",   "",     [];
            "lag",            "nonneg",   "s",    []};
           build_nozzle_spec()];
-  [par, aux] = build_options (fn, label, varargin, spec);
+  if (iscell (name))
+    net = build_bulk (fn, "valve", net, name, {from, to}, {"from", "to"},
+                      varargin, spec, @valve_unit);
+  else
+    net = build_add_unit (net, valve_unit (fn, net, name, {from, to},
+                                           varargin, spec));
+  endif
+endfunction
+
+## Check one valve against NET and make its unit.
+function u = valve_unit (fn, net, name, ends, args, spec)
+  [from, to] = ends{:};
+  label = build_check_name (fn, net, "valve", name);
+  build_check_link (fn, label, net, from, to);
+  [par, aux] = build_options (fn, label, args, spec);
   if (! isfield (par, "kv"))
     build_error (fn, label, "KV (m3/h at 1 bar) is required");
   endif
   build_check_inlet (fn, label, to, par);
-  net = build_add_unit (net, name, "valve", from, to, par, [], aux);
+  u = build_unit (name, "valve", from, to, par, [], aux);
 endfunction
 
 %!test

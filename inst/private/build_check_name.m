@@ -18,8 +18,9 @@ function label = build_check_name (fn, net, kind, name)
     build_error (fn, label, ["NAME must be an identifier (a letter, then ", ...
                              "letters, digits or _), got \"%s\""], name);
   endif
-  if (isfield (net.index, name))
-    old = net.units(net.index.(name)).kind;
+  idx = build_find_unit (net, name);
+  if (idx > 0)
+    old = net.units(idx).kind;
     build_error (fn, label, ["NAME \"%s\" is already taken by a %s in ", ...
                              "network \"%s\"; unit names must be unique"],
                  name, old, net.name);

@@ -11,12 +11,12 @@ function idx = build_check_ref (fn, label, net, field, ref, kinds)
     build_error (fn, label, "%s must be the name of a declared %s, got %s",
                  field, strjoin (kinds, " or "), build_value_str (ref));
   endif
-  if (! isvarname (ref) || ! isfield (net.index, ref))
+  idx = build_find_unit (net, ref);
+  if (idx == 0)
     build_error (fn, label, ["%s names unit \"%s\", which network \"%s\" ", ...
                              "does not hold; declare the %s first"],
                  field, ref, net.name, strjoin (kinds, " or "));
   endif
-  idx = net.index.(ref);
   kind = net.units(idx).kind;
   if (! any (strcmp (kind, kinds)))
     build_error (fn, label, "%s \"%s\" is a %s; it must be a %s",

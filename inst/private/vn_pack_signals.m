@@ -23,8 +23,9 @@ function sig = vn_pack_signals (net, u, caller)
   data = cell (1, m);
   seen = {};
   pos = 0;
+  layout = vn_quantity (net);
   for i = 1:m
-    q = vn_quantity (net, u(i).quantity, "input", caller);
+    q = vn_quantity (net, u(i).quantity, "input", caller, layout);
     if (any (strcmp (seen, q.name)))
       error ("Octave:invalid-input-arg",
              "%s: two signals drive \"%s\"; give one table per input",

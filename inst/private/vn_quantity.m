@@ -1,14 +1,27 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{q} =} vn_quantity (@var{net}, @var{name}, @var{what}, @var{caller})
+## @deftypefn  {} {@var{q} =} vn_quantity (@var{net}, @var{name}, @var{what}, @var{caller})
+## @deftypefnx {} {@var{q} =} vn_quantity (@var{net}, @var{name}, @var{what}, @var{caller}, @var{layout})
+## @deftypefnx {} {@var{layout} =} vn_quantity (@var{net})
 ## Resolve a quantity "UNIT.VARIABLE" of a network.
 ##
 ## @var{what} is "input" (an input parameter a signal may drive), "output"
 ## (a reported variable) or "param" (any numeric parameter).  Returns a
 ## struct with the unit's position, kind, the 0-based parameter slot or
 ## output index, and the flat 0-based index into the core's vectors.
+##
+## With the network alone, return its @var{layout}: @code{poff} and
+## @code{ooff}, the 0-based offset of each unit's block in the flat
+## parameter and output vectors.  Callers that resolve many quantities of
+## one network compute it once and pass it on.
 ## @end deftypefn
 
-function q = vn_quantity (net, name, what, caller)
+function q = vn_quantity (net, name, what, caller, layout)
+  if (nargin == 1)
+    q = unit_layout (net.units, vn_schema ());
+    return;
+  elseif (nargin < 5)
+    layout = [];
+  endif
   if (! ischar (name) || ! any (name == "."))
     error ("Octave:invalid-input-arg",
            "%s: a quantity is \"UNIT.VARIABLE\", got %s", caller,
@@ -17,13 +30,13 @@ function q = vn_quantity (net, name, what, caller)
   dot = find (name == ".", 1);
   uname = name(1:dot-1);
   var = name(dot+1:end);
-  if (! isfield (net.index, uname))
+  ui = build_find_unit (net, uname);
+  if (ui == 0)
     error ("Octave:invalid-input-arg",
            "%s: quantity \"%s\": the network has no unit \"%s\"", caller,
            name, uname);
   endif
   s = vn_schema ();
-  ui = net.index.(uname);
   kind = net.units(ui).kind;
   k = s.(kind);
   q.name = name;
@@ -53,7 +66,7 @@ function q = vn_quantity (net, name, what, caller)
                strjoin (allowed, ", "));
       endif
       q.slot = slot - 1;
-      q.index = param_offset (net, s, ui) + slot - 1;
+      q.index = unit_offset (net, s, ui, "poff", layout) + slot - 1;
       q.unitofmeasure = k.units{slot};
     case "output"
       j = find (strcmp (k.outputs, var), 1);
@@ -63,7 +76,7 @@ function q = vn_quantity (net, name, what, caller)
                caller, name, var, kind, uname, strjoin (k.outputs, ", "));
       endif
       q.slot = j - 1;
-      q.index = output_offset (net, s, ui) + j - 1;
+      q.index = unit_offset (net, s, ui, "ooff", layout) + j - 1;
       q.unitofmeasure = k.ounits{j};
   endswitch
 endfunction
@@ -76,18 +89,23 @@ function t = ifelse_str (what)
   endif
 endfunction
 
-function off = param_offset (net, s, ui)
-  off = 0;
-  for i = 1:ui-1
-    off += numel (s.(net.units(i).kind).params);
-  endfor
+## Offset of unit UI's block, from LAYOUT or else from the units up to UI.
+function off = unit_offset (net, s, ui, field, layout)
+  if (isempty (layout))
+    layout = unit_layout (net.units(1:ui), s);
+  endif
+  off = layout.(field)(ui);
 endfunction
 
-function off = output_offset (net, s, ui)
-  off = 0;
-  for i = 1:ui-1
-    off += numel (s.(net.units(i).kind).outputs);
-  endfor
+## Offsets of every unit's parameter and output blocks (0-based).
+function layout = unit_layout (units, s)
+  [~, code] = ismember ({units.kind}, s.kinds);
+  np = cellfun (@(k) numel (s.(k).params), s.kinds);
+  no = cellfun (@(k) numel (s.(k).outputs), s.kinds);
+  layout.poff = [0, cumsum(np(code(1:end-1)))];
+  layout.ooff = [0, cumsum(no(code(1:end-1)))];
+  layout.poff = layout.poff(1:numel (code));
+  layout.ooff = layout.ooff(1:numel (code));
 endfunction
 
 function t = disp_value (v)
