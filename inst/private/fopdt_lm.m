@@ -12,6 +12,11 @@ function [p, info] = fopdt_lm (fun, p0, maxiter)
   r = fun (p);
   ssr = r' * r;
   mu = 1e-3;
+  ## A parameter driven to its bound (a dead time of zero, in log form)
+  ## leaves a flat column; the damped step stays defined, so the solver's
+  ## singularity warnings say nothing useful here.
+  warning ("off", "Octave:singular-matrix", "local");
+  warning ("off", "Octave:nearly-singular-matrix", "local");
   converged = false;
   it = 0;
   while (it < maxiter && ! converged)
