@@ -57,9 +57,17 @@ endfunction
 %! assert (net.units(1).par, struct ("head", -0.5, "temperature", 9));
 %! assert (net.units(1).aux.species.salt, 35);
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! loop = vn_boundary (vn_boundary (vn_network (), "R1", "head", 2), "R2", "head", 5);
+%! bulk = vn_boundary (vn_network (), {"R1", "R2"}, "head", [2 5]);
+%! assert (isequal (bulk, loop));
+%! assert (bulk.units(2).par.head, 5);
+
 %!error <Invalid call> vn_boundary (vn_network ())
 %!error <vn_boundary: boundary "river": HEAD \(m\) is required> vn_boundary (vn_network (), "river")
 %!error <vn_boundary: boundary "river": HEAD must be a finite real scalar \(m\), got Inf> vn_boundary (vn_network (), "river", "head", Inf)
 %!error <vn_boundary: boundary "river": HEAD must be a finite real scalar \(m\), got a 1x2 double> vn_boundary (vn_network (), "river", "head", [1 2])
 %!error <vn_boundary: boundary "river": TEMPERATURE given \(12\) but network "network" is not thermal> vn_boundary (vn_network (), "river", "head", 1, "temperature", 12)
 %!error <vn_boundary: boundary "river": unknown option "salt"; allowed: head, temperature> vn_boundary (vn_network (), "river", "head", 1, "salt", 3)
+%!error <vn_boundary: boundary "R1" to "R2": HEAD must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_boundary (vn_network (), {"R1", "R2"}, "head", [1 2 3])

@@ -63,6 +63,14 @@ endfunction
 %! assert (net.units(2).par, struct ("flow", 0.01, "temperature", 9));
 %! assert (net.units(2).aux.species.chlorine, 1.8);
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! net = vn_tank (vn_tank (vn_network (), "T1", "area", 1), "T2", "area", 1);
+%! loop = vn_feed (vn_feed (net, "F1", "T1", "flow", 0.02), "F2", "T2", "flow", 0.03);
+%! bulk = vn_feed (net, {"F1", "F2"}, {"T1", "T2"}, "flow", [0.02 0.03]);
+%! assert (isequal (bulk, loop));
+%! assert (bulk.units(4).par.flow, 0.03);
+
 %!error <Invalid call> vn_feed (vn_network (), "F1")
 %!error <vn_feed: feed "F1": TANK names unit "T1", which network "network" does not hold> vn_feed (vn_network (), "F1", "T1", "flow", 1)
 %!error <vn_feed: feed "F1": TANK "river" is a boundary; it must be a tank> vn_feed (vn_boundary (vn_network (), "river", "head", 2), "F1", "river", "flow", 1)
@@ -71,3 +79,5 @@ endfunction
 %!error <vn_feed: feed "F1": TANK names the feed itself> vn_feed (vn_network (), "F1", "F1")
 %!error <vn_feed: feed "F1": TEMPERATURE given \(9\) but network "network" is not thermal> vn_feed (vn_tank (vn_network (), "T1", "area", 1), "F1", "T1", "temperature", 9)
 %!error <vn_feed: feed "F1": TANK "F0" is a feed; it must be a tank> vn_feed (vn_feed (vn_tank (vn_network (), "T1", "area", 1), "F0", "T1"), "F1", "F0")
+%!error <vn_feed: feed "F1" to "F2": TANK must be one value, or a cell array of one value per unit \(2\), got a 1x3 cell> vn_feed (vn_tank (vn_network (), "T1", "area", 1), {"F1", "F2"}, {"T1", "T1", "T1"}, "flow", 1)
+%!error <vn_feed: feed "F1" to "F2": FLOW must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_feed (vn_tank (vn_network (), "T1", "area", 1), {"F1", "F2"}, "T1", "flow", [1 2 3])

@@ -78,6 +78,15 @@ endfunction
 %! assert (net.units(3).par.cd, 0.62);
 %! assert (net.units(3).from, "main");
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! net = vn_tank (vn_tank (vn_network (), "T1", "area", 2), "T2", "area", 1);
+%! loop = vn_orifice (net, "O1", "T1", "T2", "coeff", 0.01);
+%! loop = vn_orifice (loop, "O2", "T2", "", "coeff", 0.02);
+%! bulk = vn_orifice (net, {"O1", "O2"}, {"T1", "T2"}, {"T2", ""}, "coeff", [0.01 0.02]);
+%! assert (isequal (bulk, loop));
+%! assert (bulk.units(4).par.coeff, 0.02);
+
 %!shared net
 %! net = vn_tank (vn_tank (vn_network (), "T1", "area", 2), "T2", "area", 1);
 %!error <Invalid call> vn_orifice (net, "O1", "T1")
@@ -92,3 +101,6 @@ endfunction
 %!error <vn_orifice: orifice "O1": INLET given \(0.2 m\) but TO is ""> vn_orifice (net, "O1", "T1", "", "coeff", 0.01, "inlet", 0.2)
 %!error <vn_orifice: orifice "O1": OUTLET must be a non-negative finite scalar \(m\), got -0.1> vn_orifice (net, "O1", "T1", "T2", "coeff", 0.01, "outlet", -0.1)
 %!error <vn_orifice: orifice "T2": NAME "T2" is already taken by a tank> vn_orifice (net, "T2", "T1", "", "coeff", 0.01)
+%!error <vn_orifice: orifice "O1" to "O2": COEFF must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_orifice (net, {"O1", "O2"}, "T1", "T2", "coeff", [1 2 3])
+%!error <vn_orifice: orifice "O1" to "O2": TO must be one value, or a cell array of one value per unit \(2\), got a 1x1 cell> vn_orifice (net, {"O1", "O2"}, "T1", {"T2"}, "coeff", 0.01)
+%!error <vn_orifice: orifice "O2": FROM and TO are both "T2"> vn_orifice (net, {"O1", "O2"}, {"T1", "T2"}, "T2", "coeff", 0.01)

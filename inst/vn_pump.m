@@ -91,6 +91,14 @@ endfunction
 %! assert ({net.units(3).from, net.units(3).to}, {"river", "T1"});
 %! assert (net.units(3).par.inlet, 1);
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! net = vn_tank (vn_tank (vn_network (), "T1", "area", 2), "T2", "area", 1);
+%! loop = vn_pump (net, "P1", "T1", "T2", "flow", 0.01, "speed", 0.5);
+%! loop = vn_pump (loop, "P2", "T2", "T1", "flow", 0.02, "speed", 0.5);
+%! bulk = vn_pump (net, {"P1", "P2"}, {"T1", "T2"}, {"T2", "T1"}, "flow", [0.01 0.02], "speed", 0.5);
+%! assert (isequal (bulk, loop));
+
 %!shared net
 %! net = vn_tank (vn_tank (vn_network (), "T1", "area", 2), "T2", "area", 1);
 %!error <Invalid call> vn_pump (net, "P1", "T1")
@@ -101,3 +109,4 @@ endfunction
 %!error <vn_pump: pump "P1": SPEED must be a non-negative finite scalar, got -1> vn_pump (net, "P1", "T1", "T2", "flow", 0.01, "speed", -1)
 %!error <vn_pump: pump "P1": FROM and TO are both "T2"> vn_pump (net, "P1", "T2", "T2", "flow", 0.01)
 %!error <vn_pump: pump "P1": FROM names unit "T9", which network "network" does not hold> vn_pump (net, "P1", "T9", "T2", "flow", 0.01)
+%!error <vn_pump: pump "P1" to "P2": SPEED must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_pump (net, {"P1", "P2"}, "T1", "T2", "flow", 0.01, "speed", [1 1 1])

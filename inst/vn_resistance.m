@@ -48,6 +48,13 @@ endfunction
 %! assert (u.par.r, 1800);
 %! assert (net.units(4).par, struct ("r", 7200, "outlet", 0.05));
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! net = vn_tank (vn_tank (vn_network (), "T1", "area", 1), "T2", "area", 0.5);
+%! loop = vn_resistance (vn_resistance (net, "R1", "T1", "T2", "r", 1800), "R2", "T2", "", "r", 7200);
+%! bulk = vn_resistance (net, {"R1", "R2"}, {"T1", "T2"}, {"T2", ""}, "r", {1800, 7200});
+%! assert (isequal (bulk, loop));
+
 %!shared net
 %! net = vn_tank (vn_network (), "T1", "area", 1);
 %!error <Invalid call> vn_resistance (net, "R1", "T1")
@@ -55,3 +62,4 @@ endfunction
 %!error <vn_resistance: resistance "R1": R must be a positive finite scalar \(s/m2\), got 0> vn_resistance (net, "R1", "T1", "", "r", 0)
 %!error <vn_resistance: resistance "R1": unknown option "k"; allowed: r, outlet, inlet> vn_resistance (net, "R1", "T1", "", "k", 3)
 %!error <vn_resistance: resistance "R1": TO must be the name of a declared tank or boundary, or "" for free discharge, got 2> vn_resistance (net, "R1", "T1", 2, "r", 5)
+%!error <vn_resistance: resistance "R1" to "R2": R must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x1 cell> vn_resistance (net, {"R1", "R2"}, "T1", "", "r", {5})

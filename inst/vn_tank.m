@@ -276,6 +276,18 @@ endfunction
 %! assert (u.aux.species.chlorine, 1.2);
 %! assert (isfield (u.par, "chlorine"), false);
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! loop = vn_network ("w");
+%! for i = 1:4
+%!   loop = vn_tank (loop, sprintf ("T%d", i), "area", 1.5, "level", i / 2);
+%! endfor
+%! bulk = vn_tank (vn_network ("w"), {"T1", "T2", "T3", "T4"}, "area", 1.5,
+%!                 "level", [0.5 1 1.5 2]);
+%! assert (isequal (bulk, loop));
+%! assert (bulk.units(3).par.level, 1.5);
+%! assert (bulk.index.T4, 4);
+
 %!error <Invalid call> vn_tank (vn_network ())
 %!error <vn_tank: tank "T1": AREA must be a positive finite scalar \(m2\), got -2> vn_tank (vn_network (), "T1", "area", -2)
 %!error <vn_tank: tank "T1": DIAMETER must be a positive finite scalar \(m\), got NaN> vn_tank (vn_network (), "T1", "diameter", NaN)
@@ -308,3 +320,5 @@ endfunction
 %!error <vn_tank: tank "T1": UA given \(60\) but network "network" is not thermal> vn_tank (vn_network (), "T1", "area", 1, "ua", 60)
 %!error <vn_tank: tank "T1": option AREA is given twice> vn_tank (vn_network (), "T1", "area", 1, "area", 2)
 %!error <vn_tank: tank "T1": options must come in name/value pairs> vn_tank (vn_network (), "T1", "area")
+%!error <vn_tank: tank "T1" to "T2": AREA must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_tank (vn_network (), {"T1", "T2"}, "area", [1 2 3])
+%!error <vn_tank: tank "T2": LEVEL must not exceed RIM \(2 m\), got 2.5> vn_tank (vn_network (), {"T1", "T2"}, "area", 1, "rim", 2, "level", [1 2.5])

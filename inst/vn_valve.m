@@ -83,6 +83,16 @@ endfunction
 %! assert (net.units(4).par.char, 0);
 %! assert (net.index.V2, 4);
 
+%!test
+%! ## The bulk form builds what a loop of single calls builds.
+%! net = vn_tank (vn_tank (vn_network (), "A", "area", 1), "B", "area", 1);
+%! loop = vn_valve (net, "V1", "A", "B", "kv", 10, "characteristic", "quick");
+%! loop = vn_valve (loop, "V2", "B", "", "kv", 5, "characteristic", "equal");
+%! bulk = vn_valve (net, {"V1", "V2"}, {"A", "B"}, {"B", ""}, "kv", [10 5],
+%!                  "characteristic", {"quick", "equal"});
+%! assert (isequal (bulk, loop));
+%! assert ([bulk.units(3:4).par], [loop.units(3:4).par]);
+
 %!shared net
 %! net = vn_tank (vn_network (), "T2", "area", 1.5);
 %!error <Invalid call> vn_valve (net, "LV1", "T2")
@@ -94,3 +104,5 @@ endfunction
 %!error <vn_valve: valve "LV1": RANGEABILITY must be a finite scalar greater than 1, got 1> vn_valve (net, "LV1", "T2", "", "kv", 4, "rangeability", 1)
 %!error <vn_valve: valve "LV1": LAG must be a non-negative finite scalar \(s\), got -1> vn_valve (net, "LV1", "T2", "", "kv", 4, "lag", -1)
 %!error <vn_valve: valve "LV1": FROM "F1" is a feed; it must be a tank or boundary> vn_valve (vn_feed (net, "F1", "T2"), "LV1", "F1", "T2", "kv", 4)
+%!error <vn_valve: valve "LV1" to "LV2": CHARACTERISTIC must be one value, or a cell array of one value per unit \(2\), got a 1x3 cell> vn_valve (net, {"LV1", "LV2"}, "T2", "", "kv", 4, "characteristic", {"linear", "equal", "quick"})
+%!error <vn_valve: valve "LV2": OPENING must be a scalar in \[0, 1\], got 1.5> vn_valve (net, {"LV1", "LV2"}, "T2", "", "kv", 4, "opening", [0.5 1.5])

@@ -91,3 +91,54 @@ function c = per_unit (fn, label, key, v, n, scalar)
     c = repmat ({v}, 1, n);
   endif
 endfunction
+
+%!test
+%! ## Bulk calls and a loop of single calls give the same packed network.
+%! loop = vn_boundary (vn_network ("b"), "R0", "head", 3);
+%! lv = [0.5 1.5 2.5];
+%! for i = 1:3
+%!   loop = vn_tank (loop, sprintf ("T%d", i), "area", 2, "level", lv(i), "rim", 3);
+%! endfor
+%! loop = vn_feed (loop, "F1", "T1", "flow", 0.01);
+%! loop = vn_feed (loop, "F2", "T2", "flow", -0.002);
+%! loop = vn_orifice (loop, "O1", "T1", "T2", "coeff", 0.01);
+%! loop = vn_orifice (loop, "O2", "T2", "", "diameter", 0.04);
+%! loop = vn_resistance (loop, "R1", "R0", "T1", "r", 900);
+%! loop = vn_valve (loop, "V1", "T3", "", "kv", 12, "characteristic", "equal");
+%! loop = vn_valve (loop, "V2", "T3", "R0", "kv", 8, "characteristic", "linear");
+%! loop = vn_pump (loop, "P1", "T2", "T3", "flow", 0.004);
+%! loop = vn_pump (loop, "P2", "T3", "T1", "shutoff", 20, "k", 1e4);
+%! bulk = vn_boundary (vn_network ("b"), {"R0"}, "head", 3);
+%! bulk = vn_tank (bulk, {"T1", "T2", "T3"}, "area", 2, "level", lv, "rim", 3);
+%! bulk = vn_feed (bulk, {"F1", "F2"}, {"T1", "T2"}, "flow", [0.01 -0.002]);
+%! bulk = vn_orifice (bulk, {"O1"}, "T1", "T2", "coeff", 0.01);
+%! bulk = vn_orifice (bulk, {"O2"}, {"T2"}, {""}, "diameter", 0.04);
+%! bulk = vn_resistance (bulk, {"R1"}, "R0", "T1", "r", 900);
+%! bulk = vn_valve (bulk, {"V1", "V2"}, "T3", {"", "R0"}, "kv", [12 8],
+%!                  "characteristic", {"equal", "linear"});
+%! bulk = vn_pump (bulk, {"P1"}, "T2", "T3", "flow", 0.004);
+%! bulk = vn_pump (bulk, {"P2"}, "T3", "T1", "shutoff", 20, "k", 1e4);
+%! a = vn_pack (loop);
+%! b = vn_pack (bulk);
+%! assert (isequaln (a, b));
+%! assert (b.par(1,2:4), [0 0 0]);                 # prism shape code
+%! j = find (strcmp (vn_schema ().valve.params, "char"));
+%! assert (b.par([1 j],10:11), [12 8; 1 0]);       # kv; equal, linear
+%! assert (double (b.ref(:,11).'), [3 0 -1 -1]);    # V2: T3 -> R0, 0-based
+%! assert (double (b.ref(:,5).'), [-1 1 -1 -1]);    # F1 into T1
+
+%!test
+%! ## A spill into a tank declared earlier in the same call, and a table
+%! ## per tank from a cell array.
+%! tabs = {[0 0; 1 2], [0 0; 1 3; 2 7]};
+%! net = vn_tank (vn_network (), {"A", "B"}, "table", tabs, "rim", [0.9 1.8],
+%!                "spill", {"", "A"});
+%! assert (net.units(2).to, "A");
+%! assert (net.units(2).table, tabs{2});
+%! assert ([net.index.A, net.index.B], [1 2]);
+
+%!error <vn_tank: tank "B": SPILL names unit "C", which network "network" does not hold> vn_tank (vn_network (), {"A", "B", "C"}, "area", 1, "rim", 2, "spill", {"", "C", ""})
+%!error <vn_tank: tank "T1" to "T3": LEVEL must be a scalar, or a vector or cell array of one value per unit \(3\), got a 1x2 double> vn_tank (vn_network (), {"T1", "T2", "T3"}, "area", 1, "level", [1 2])
+%!error <vn_tank: tank "T2": NAME "T2" is already taken by a tank> vn_tank (vn_network (), {"T1", "T2", "T2"}, "area", 1)
+%!error <vn_tank: tank "T2": AREA must be a positive finite scalar \(m2\), got -1> vn_tank (vn_network (), {"T1", "T2"}, "area", [1 -1])
+%!error <vn_tank: tank: NAME must be a char identifier or a non-empty cell array of them, got an empty cell> vn_tank (vn_network (), {}, "area", 1)
