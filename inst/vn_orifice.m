@@ -1,6 +1,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{net} =} vn_orifice (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"coeff"}, @var{c}, @dots{})
 ## @deftypefnx {} {@var{net} =} vn_orifice (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"diameter"}, @var{d}, @qcode{"cd"}, @var{Cd}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_orifice (@var{net}, @{@var{name1}, @dots{}@}, @var{from}, @var{to}, @dots{})
 ## Add an orifice (square-root flow law) from @var{from} to @var{to}.
 ##
 ## The flow is F = @var{c} sqrt (dH), with @var{c} in m2.5/s, or by
@@ -11,6 +12,12 @@
 ## declared tank or boundary; @var{to} a tank, a boundary or @qcode{""} for
 ## free discharge.  Options @qcode{"outlet"} and @qcode{"inlet"} set the
 ## nozzle heights, m, above the base of the source and destination.
+##
+## Bulk form: given a cell array of names, one orifice is added per name in
+## one call, with the same checks and messages as one call each;
+## @var{from} and @var{to} are each one name for all or a cell array of
+## one name per orifice, and a numeric option is a scalar or a vector of one
+## value per orifice.
 ##
 ## @seealso{vn_resistance, vn_valve, vn_pump, vn_tank}
 ## @end deftypefn

@@ -1,6 +1,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{net} =} vn_pump (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"flow"}, @var{q}, @dots{})
 ## @deftypefnx {} {@var{net} =} vn_pump (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"shutoff"}, @var{h0}, @qcode{"k"}, @var{k}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_pump (@var{net}, @{@var{name1}, @dots{}@}, @var{from}, @var{to}, @dots{})
 ## Add a pump from @var{from} to @var{to}.
 ##
 ## Give exactly one mode: a fixed-flow pump delivers @var{q}, m3/s, times
@@ -21,6 +22,12 @@
 ##
 ## Pump curves must be checked against the manufacturer's data before the
 ## model is used to operate a plant.
+##
+## Bulk form: given a cell array of names, one pump is added per name in
+## one call, with the same checks and messages as one call each;
+## @var{from} and @var{to} are each one name for all or a cell array of
+## one name per pump, and a numeric option is a scalar or a vector of one
+## value per pump.
 ##
 ## @seealso{vn_valve, vn_orifice, vn_resistance, vn_signal}
 ## @end deftypefn

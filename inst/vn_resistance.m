@@ -1,11 +1,18 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{net} =} vn_resistance (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"r"}, @var{r}, @dots{})
+## @deftypefn  {} {@var{net} =} vn_resistance (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"r"}, @var{r}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_resistance (@var{net}, @{@var{name1}, @dots{}@}, @var{from}, @var{to}, @dots{})
 ## Add a linear flow resistance from @var{from} to @var{to}.
 ##
 ## The flow is F = dH / @var{r}, @var{r} in s/m2 (required), dH the source
 ## head less the larger of the destination head and the inlet elevation.
 ## Ends and the @qcode{"outlet"} and @qcode{"inlet"} nozzle heights, m, are
 ## as for @code{vn_orifice}.
+##
+## Bulk form: given a cell array of names, one resistance is added per name in
+## one call, with the same checks and messages as one call each;
+## @var{from} and @var{to} are each one name for all or a cell array of
+## one name per resistance, and a numeric option is a scalar or a vector of one
+## value per resistance.
 ##
 ## @seealso{vn_orifice, vn_valve, vn_pump, vn_tank}
 ## @end deftypefn

@@ -1,5 +1,6 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{net} =} vn_valve (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"kv"}, @var{kv}, @dots{})
+## @deftypefn  {} {@var{net} =} vn_valve (@var{net}, @var{name}, @var{from}, @var{to}, @qcode{"kv"}, @var{kv}, @dots{})
+## @deftypefnx {} {@var{net} =} vn_valve (@var{net}, @{@var{name1}, @dots{}@}, @var{from}, @var{to}, @dots{})
 ## Add a control valve from @var{from} to @var{to}.
 ##
 ## Liquid sizing after IEC 60534-2-1 (non-choked): Q = Kv f(x)
@@ -23,6 +24,12 @@
 ##
 ## Valve data must be checked against the manufacturer's sheet before a
 ## model sized with it is used on a live loop.
+##
+## Bulk form: given a cell array of names, one valve is added per name in
+## one call, with the same checks and messages as one call each;
+## @var{from} and @var{to} are each one name for all or a cell array of
+## one name per valve, and a numeric option is a scalar or a vector of one
+## value per valve (@qcode{"characteristic"}: one name or a cell array).
 ##
 ## @seealso{vn_orifice, vn_resistance, vn_pump, vn_signal}
 ## @end deftypefn

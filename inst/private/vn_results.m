@@ -41,33 +41,30 @@ function res = vn_results (net, t, X, Y, states, u)
     F = [k.outputs(:); k.params(inp)(:)];
     uom = [k.ounits(:); k.units(inp)(:)];
     no = numel (k.outputs);
-    C = cell (numel (F), numel (idx));
-    for j = 1:no
-      C(j,:) = num2cell (Y(:, layout.ooff(idx) + j), 1);
-    endfor
     vals = input_values (U(idx), k, inp);
-    for j = 1:numel (inp)
-      C(no+j,:) = num2cell (repmat (vals(j,:), nt, 1), 1);
-    endfor
     m = cell2struct (uom, F, 1);
-    plain = idx(! touched(idx));
-    if (! isempty (plain))
-      [src, F2, m2] = props_map (net, U(plain(1)), F, m);
+    plain = ! touched(idx);
+    src = [];
+    if (any (plain))
+      [src, F2, m2] = props_map (net, U(idx(find (plain, 1))), F, m);
       if (isempty (src))
         ## The renaming is not a plain field map: unit by unit.
         slow(idx) = true;
-        plain = [];
+        plain(:) = false;
       else
-        rk = cell2struct (C(src, ! touched(idx)), F2, 1);
-        R(plain) = num2cell (rk(:).');
-        M(plain) = {m2};
+        ## Only the columns the result keeps are taken out of Y.
+        rk = cell2struct (columns_of (Y, layout.ooff(idx(plain)), vals(:,plain),
+                                      no, src, nt), F2, 1);
+        R(idx(plain)) = num2cell (rk(:).');
+        M(idx(plain)) = {m2};
       endif
     endif
-    rest = idx(! ismember (idx, plain));
-    if (! isempty (rest))
-      rk = cell2struct (C(:, ismember (idx, rest)), F, 1);
-      R(rest) = num2cell (rk(:).');
-      M(rest) = {m};
+    if (! all (plain))
+      rest = ! plain;
+      rk = cell2struct (columns_of (Y, layout.ooff(idx(rest)), vals(:,rest),
+                                    no, 1:numel (F), nt), F, 1);
+      R(idx(rest)) = num2cell (rk(:).');
+      M(idx(rest)) = {m};
     endif
   endfor
   res = one_struct (t, R, names);
@@ -116,6 +113,20 @@ function res = vn_results (net, t, X, Y, states, u)
       res.units.(names{i}) = part.units.(names{i});
     endfor
   endif
+endfunction
+
+## Cell of columns, one row per field ROWS of a kind (outputs first, then
+## the NO+j-th field the j-th held input), one column per unit.
+function C = columns_of (Y, ooff, vals, no, rows, nt)
+  C = cell (numel (rows), numel (ooff));
+  for r = 1:numel (rows)
+    j = rows(r);
+    if (j <= no)
+      C(r,:) = num2cell (Y(:, ooff + j), 1);
+    else
+      C(r,:) = num2cell (repmat (vals(j-no,:), nt, 1), 1);
+    endif
+  endfor
 endfunction
 
 ## Position of the unit of quantity Q ("UNIT.VAR").
