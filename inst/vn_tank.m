@@ -25,7 +25,9 @@
 ## @item @qcode{"base"}
 ## Elevation of the tank bottom, m (default 0).
 ## @item @qcode{"rim"}
-## Level of the spill weir above the base, m (default Inf: no spill).
+## Level of the spill weir above the base, m.  Default: the top of a
+## horizontal cylinder, sphere or cone, or the @qcode{"height"} of a prism
+## that has one; otherwise Inf (no spill).
 ## @item @qcode{"crest"}, @qcode{"contractions"}
 ## Weir crest length, m (default the perimeter) and its end contractions
 ## (0, 1 or 2) in the Francis formula Q = 1.84 (L - 0.1 n H) H^1.5.
