@@ -93,6 +93,11 @@ function q = fit_quantity (net, s, name, who)
   endif
   ui = net.index.(un);
   k = s.(net.units(ui).kind);
+  ## a declared species is carried in the core's slot c<k>
+  ks = find (strcmp (net.options.species, var), 1);
+  if (! isempty (ks))
+    var = sprintf ("c%d", ks);
+  endif
   slot = find (strcmp (k.params, var), 1);
   if (! isempty (slot) && k.isinput(slot))
     q = vn_quantity (net, name, "input", who);

@@ -17,7 +17,7 @@
 
 function q = vn_quantity (net, name, what, caller, layout)
   if (nargin == 1)
-    q = unit_layout (net.units, vn_schema ());
+    q = unit_layout (net.units, vn_schema (), numel (net.options.species));
     return;
   elseif (nargin < 5)
     layout = [];
@@ -69,15 +69,20 @@ function q = vn_quantity (net, name, what, caller, layout)
       q.index = unit_offset (net, s, ui, "poff", layout) + slot - 1;
       q.unitofmeasure = k.units{slot};
     case "output"
-      j = find (strcmp (k.outputs, var), 1);
+      [outs, ounits] = vn_outputs_of (net, kind);
+      j = find (strcmp (outs, var), 1);
       if (isempty (j))
+        shown = outs;
+        if (strcmp (kind, "tank"))
+          shown = [shown(1:5), net.options.species(:).'];
+        endif
         error ("Octave:invalid-input-arg",
                "%s: quantity \"%s\": %s is not an output of %s \"%s\"; outputs: %s",
-               caller, name, var, kind, uname, strjoin (k.outputs, ", "));
+               caller, name, q.var, kind, uname, strjoin (shown, ", "));
       endif
       q.slot = j - 1;
       q.index = unit_offset (net, s, ui, "ooff", layout) + j - 1;
-      q.unitofmeasure = k.ounits{j};
+      q.unitofmeasure = ounits{j};
   endswitch
 endfunction
 
@@ -92,16 +97,16 @@ endfunction
 ## Offset of unit UI's block, from LAYOUT or else from the units up to UI.
 function off = unit_offset (net, s, ui, field, layout)
   if (isempty (layout))
-    layout = unit_layout (net.units(1:ui), s);
+    layout = unit_layout (net.units(1:ui), s, numel (net.options.species));
   endif
   off = layout.(field)(ui);
 endfunction
 
 ## Offsets of every unit's parameter and output blocks (0-based).
-function layout = unit_layout (units, s)
+function layout = unit_layout (units, s, nspecies)
   [~, code] = ismember ({units.kind}, s.kinds);
   np = cellfun (@(k) numel (s.(k).params), s.kinds);
-  no = cellfun (@(k) numel (s.(k).outputs), s.kinds);
+  no = cellfun (@(k) s.(k).nout_base + nspecies * s.(k).nout_species, s.kinds);
   layout.poff = [0, cumsum(np(code(1:end-1)))];
   layout.ooff = [0, cumsum(no(code(1:end-1)))];
   layout.poff = layout.poff(1:numel (code));

@@ -38,9 +38,10 @@ function res = vn_results (net, t, X, Y, states, u)
     ## outputs, then the inputs held at their declared values
     inp = find (k.isinput);
     inp = inp(! ismember (k.params(inp), k.outputs));
-    F = [k.outputs(:); k.params(inp)(:)];
-    uom = [k.ounits(:); k.units(inp)(:)];
-    no = numel (k.outputs);
+    [outs, ounits] = vn_outputs_of (net, kk{c});
+    F = [outs(:); k.params(inp)(:)];
+    uom = [ounits(:); k.units(inp)(:)];
+    no = numel (outs);
     vals = input_values (U(idx), k, inp);
     m = cell2struct (uom, F, 1);
     plain = ! touched(idx);

@@ -54,6 +54,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_boundary = {
-  "boundary", VN_ROLE_NODE, NPAR, par, 1, out, ounit,
+  "boundary", VN_ROLE_NODE, NPAR, par, 1, out, ounit, 0, 0,
   check, NULL, NULL, NULL, node, NULL, NULL, NULL, NULL, outputs
 };

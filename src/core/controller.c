@@ -274,6 +274,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_controller = {
-  "controller", VN_ROLE_OTHER, NPAR, par, 3, out, ounit,
+  "controller", VN_ROLE_OTHER, NPAR, par, 3, out, ounit, 0, 0,
   check, nstates, state_var, init, NULL, NULL, own, pre, NULL, outputs
 };

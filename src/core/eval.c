@@ -206,15 +206,15 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
         vn_unit *u = &net->u[i];
         double *yu = net->y + u->yoff;
         vn_lf *dyu = net->dy + u->yoff;
-        for (int j = 0; j < u->k->nout; j++)
+        for (int j = 0; j < u->nout; j++)
           dyu[j].n = 0;
         u->k->outputs (net, u, &net->nd[i], x, yu, want_dy ? dyu : NULL);
         if (want_dy)
-          for (int j = 0; j < u->k->nout; j++)
+          for (int j = 0; j < u->nout; j++)
             vn_emit (net, u->yoff + j, 1.0, &dyu[j],
                      want_yx ? &net->yx : NULL, want_yp ? &net->yp : NULL);
         if (y)
-          memcpy (y + u->yoff, yu, (size_t) u->k->nout * sizeof *y);
+          memcpy (y + u->yoff, yu, (size_t) u->nout * sizeof *y);
       }
   for (int i = 0; i < net->nx && f; i++)
     if (!isfinite (fw[i]))

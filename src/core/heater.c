@@ -115,6 +115,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_heater = {
-  "heater", VN_ROLE_HEAT, NPAR, par, 1, out, ounit,
+  "heater", VN_ROLE_HEAT, NPAR, par, 1, out, ounit, 0, 0,
   check, nstates, state_var, init, NULL, NULL, own, NULL, heat, outputs
 };

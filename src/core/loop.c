@@ -13,7 +13,7 @@ double vn_measure (vn_net *net, const vn_unit *u, const double *x,
   vn_unit *m = &net->u[u->ref[0]];
   double y[VN_NOUTMAX];
   vn_lf dy[VN_NOUTMAX];
-  for (int j = 0; j < m->k->nout; j++)
+  for (int j = 0; j < m->nout; j++)
     {
       dy[j].n = 0;
       y[j] = NAN;   /* outputs the network does not carry */
@@ -27,12 +27,12 @@ int vn_check_loop_refs (vn_net *net, vn_unit *u)
 {
   int self = (int) (u - net->u);
   int mu = u->ref[0], mo = u->ref[1], cu = u->ref[2], cp = u->ref[3];
-  if (mu < 0 || mu >= net->nu || mo < 0 || mo >= net->u[mu].k->nout)
+  if (mu < 0 || mu >= net->nu || mo < 0 || mo >= net->u[mu].nout)
     return vn_fail_unit (net, u, "measure must name an output of a unit "
                          "(unit %d, output %d given)", mu, mo);
   if (mu == self)
     return vn_fail_unit (net, u, "it cannot measure its own output");
-  if (net->u[mu].k->nout > VN_NOUTMAX)
+  if (net->u[mu].nout > VN_NOUTMAX)
     return vn_fail_unit (net, u, "measured unit has too many outputs");
   if (cu < 0 || cu >= net->nu || cp < 0 || cp >= net->u[cu].k->npar
       || !(net->u[cu].k->par[cp].flags & VN_P_INPUT))

@@ -205,6 +205,14 @@ static int setup_units (vn_net *net, const vn_spec *s)
 static int setup_layout (vn_net *net)
 {
   int nx = 0, ny = 0;
+  /* output counts first: a controller's check reads the measured unit's */
+  for (int i = 0; i < net->nu; i++)
+    {
+      vn_unit *u = &net->u[i];
+      u->nout = u->k->nout_base
+                ? u->k->nout_base + u->k->nout_species * net->nspecies
+                : u->k->nout;
+    }
   for (int i = 0; i < net->nu; i++)
     {
       vn_unit *u = &net->u[i];
@@ -218,7 +226,7 @@ static int setup_layout (vn_net *net)
       u->nx = u->k->nstates ? u->k->nstates (net, u) : 0;
       nx += u->nx;
       u->yoff = ny;
-      ny += u->k->nout;
+      ny += u->nout;
     }
   net->nx = nx;
   net->ny = ny;
@@ -229,8 +237,6 @@ static int setup_layout (vn_net *net)
   net->y = calloc ((size_t) (ny ? ny : 1), sizeof *net->y);
   if (!net->nd || !net->dy || !net->y)
     return VN_ENOMEM;
-  /* outputs a network does not carry (temperatures of a network that is
-   * not thermal, unused species slots) stay NaN: kinds skip them */
   for (int i = 0; i < ny; i++)
     net->y[i] = NAN;
   return VN_OK;
@@ -313,7 +319,7 @@ int vn_param_index (const vn_net *net, int unit, int slot)
 
 int vn_output_index (const vn_net *net, int unit, int out)
 {
-  if (unit < 0 || unit >= net->nu || out < 0 || out >= net->u[unit].k->nout)
+  if (unit < 0 || unit >= net->nu || out < 0 || out >= net->u[unit].nout)
     return -1;
   return net->u[unit].yoff + out;
 }

@@ -79,6 +79,6 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
 }
 
 const vn_kind vn_kind_orifice = {
-  "orifice", VN_ROLE_LINK, NPAR, par, 1, out, ounit,
+  "orifice", VN_ROLE_LINK, NPAR, par, 1, out, ounit, 0, 0,
   check, NULL, NULL, NULL, NULL, flow, NULL, NULL, NULL, vn_link_flow_output
 };

@@ -134,6 +134,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_pump = {
-  "pump", VN_ROLE_LINK, NPAR, par, 2, out, ounit,
+  "pump", VN_ROLE_LINK, NPAR, par, 2, out, ounit, 0, 0,
   check, NULL, NULL, NULL, NULL, flow, NULL, NULL, NULL, outputs
 };

@@ -66,6 +66,13 @@ const char *vn_kind_out_unit (int k, int i)
 
 int vn_npmax (void) { return VN_NPMAX; }
 
+void vn_kind_nout_rule (int k, int *base, int *per_species)
+{
+  const vn_kind *K = kind_at (k);
+  *base = K ? (K->nout_base ? K->nout_base : K->nout) : 0;
+  *per_species = K ? K->nout_species : 0;
+}
+
 const char *vn_status_str (int status)
 {
   switch (status)

@@ -78,6 +78,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_switch = {
-  "switch", VN_ROLE_OTHER, NPAR, par, 2, out, ounit,
+  "switch", VN_ROLE_OTHER, NPAR, par, 2, out, ounit, 0, 0,
   check, NULL, NULL, NULL, NULL, NULL, NULL, pre, NULL, outputs
 };

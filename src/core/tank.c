@@ -506,9 +506,8 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
   y[1] = nd->V;
   y[2] = nd->H;
   y[3] = u->q;
-  /* temperature and species only when carried (else NaN, set once) */
-  if (net->thermal)
-    y[4] = nd->T;
+  /* temperature only when carried (else NaN) */
+  y[4] = net->thermal ? nd->T : NAN;
   for (int k = 0; k < net->nspecies; k++)
     y[5 + k] = nd->c[k];
   if (!dy)
@@ -531,6 +530,8 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_tank = {
-  "tank", VN_ROLE_NODE, NPAR, par, NOUT, out, ounit,
+  /* outputs: level, volume, head, spill, temperature (NaN unless thermal),
+   * then one concentration per declared species */
+  "tank", VN_ROLE_NODE, NPAR, par, NOUT, out, ounit, 5, 1,
   check, nstates, state_var, init, node, NULL, own, NULL, NULL, outputs
 };

@@ -174,6 +174,6 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
 }
 
 const vn_kind vn_kind_valve = {
-  "valve", VN_ROLE_LINK, NPAR, par, 2, out, ounit,
+  "valve", VN_ROLE_LINK, NPAR, par, 2, out, ounit, 0, 0,
   check, nstates, state_var, init, NULL, flow, own, NULL, NULL, outputs
 };

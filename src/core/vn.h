@@ -48,6 +48,9 @@ int vn_kind_nout (int kind);
 const char *vn_kind_out_name (int kind, int i);
 const char *vn_kind_out_unit (int kind, int i);
 int vn_npmax (void);                        /* rows of vn_spec.par */
+/* A unit of this kind reports the first base outputs of its list plus
+ * per_species for each species the network declares. */
+void vn_kind_nout_rule (int kind, int *base, int *per_species);
 
 /* ---- building ---- */
 typedef struct vn_spec {

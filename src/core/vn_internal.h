@@ -78,6 +78,7 @@ struct vn_unit {
   int poff;               /* first parameter in net->p */
   int xoff, nx;           /* owned states */
   int yoff;               /* first output */
+  int nout;               /* outputs in this network (<= kind's list) */
   const double *tab;      /* table pairs (owned by net) */
   int ntab;
   double d[12];           /* derived constants set by the kind's check */
@@ -94,6 +95,9 @@ struct vn_kind {
   int nout;
   const char *const *out;
   const char *const *ounit;
+  /* outputs a network carries: the first nout_base of out[] plus
+   * nout_species per declared species (0, 0: all of out[]) */
+  int nout_base, nout_species;
   /* kind rules beyond the generic range checks; sets derived constants */
   int (*check) (vn_net *net, vn_unit *u);
   int (*nstates) (const vn_net *net, const vn_unit *u);

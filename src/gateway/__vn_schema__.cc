@@ -43,6 +43,10 @@ DEFUN_DLD (__vn_schema__, , ,
       m.assign ("iscode", code);
       m.assign ("outputs", on);
       m.assign ("ounits", ou);
+      int base, per;
+      vn_kind_nout_rule (k, &base, &per);
+      m.assign ("nout_base", base);
+      m.assign ("nout_species", per);
       s.assign (vn_kind_name (k), m);
     }
   s.assign ("kinds", kinds);
