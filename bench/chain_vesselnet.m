@@ -25,10 +25,13 @@
 ## @seealso{chain_ode15s, vn_simulate}
 ## @end deftypefn
 
-function [t, h, stats, net] = chain_vesselnet (N)
+function [t, h, stats, net] = chain_vesselnet (N, record)
 
-  if (nargin != 1)
+  if (nargin < 1 || nargin > 2)
     print_usage ();
+  endif
+  if (nargin < 2)
+    record = "all";
   endif
   tbuild = 0;
   if (isstruct (N))
@@ -45,7 +48,12 @@ function [t, h, stats, net] = chain_vesselnet (N)
   endif
 
   t0 = tic ();
-  res = vn_simulate (net, [0 3600], "dt", 5, "reltol", 1e-6, "abstol", 1e-8);
+  ## "levels" records what the floor records; "all" every output
+  args = {"dt", 5, "reltol", 1e-6, "abstol", 1e-8};
+  if (strcmp (record, "levels"))
+    args(end+1:end+2) = {"record", "levels"};
+  endif
+  res = vn_simulate (net, [0 3600], args{:});
   tcall = toc (t0);
 
   t = res.t;

@@ -89,7 +89,7 @@ sim = struct ([]);
 nets = {};
 for k = 1:numel (Ns)
   N = Ns(k);
-  r = struct ("N", N, "vn", [], "call", NaN, "build", NaN, "bytes", NaN,
+  r = struct ("N", N, "vn", [], "allwall", NaN, "call", NaN, "build", NaN, "bytes", NaN,
               "hwm", NaN, "fl", [], "ode", NaN, "odes", [], "net", [], "h", []);
   ## Floor: median wall over nrep runs.
   fw = zeros (1, nrep);
@@ -100,7 +100,11 @@ for k = 1:numel (Ns)
   r.fl.wall = median (fw);
   if (N <= nmax)
     hwm0 = bench_vmhwm ();
-    [~, h, s, net] = chain_vesselnet (N);
+    [~, ~, sall, net] = chain_vesselnet (N);
+    r.allwall = sall.wall;
+    [~, h, s] = chain_vesselnet (net, "levels");
+    s.build = sall.build;
+    s.bytes = sall.bytes;
     r.build = s.build;
     r.bytes = s.bytes;
     w = zeros (1, nrep);
@@ -108,7 +112,7 @@ for k = 1:numel (Ns)
     w(1) = s.wall;
     c(1) = s.call;
     for j = 2:nrep
-      [~, h, s] = chain_vesselnet (net);
+      [~, h, s] = chain_vesselnet (net, "levels");
       w(j) = s.wall;
       c(j) = s.call;
     endfor
@@ -129,9 +133,9 @@ for k = 1:numel (Ns)
   sim = [sim, r];
 endfor
 
-printf ("\n1. Simulation (wall s; vesselnet core = res.stats.wall, call = whole vn_simulate)\n\n");
-printf ("| N     | vn core  | vn call  | floor    | ode15s   | vn/floor | ode15s/vn | vn steps/rhs/jac | floor steps/rhs/jac | ode15s steps/rhs |\n");
-printf ("|-------|----------|----------|----------|----------|----------|-----------|------------------|---------------------|------------------|\n");
+printf ("\n1. Simulation (wall s; vesselnet core = res.stats.wall recording the levels, as the floor does;\n   all = the same run recording every output; call = whole vn_simulate)\n\n");
+printf ("| N     | vn core  | vn all   | vn call  | floor    | ode15s   | vn/floor | ode15s/vn | vn steps/rhs/jac | floor steps/rhs/jac | ode15s steps/rhs |\n");
+printf ("|-------|----------|----------|----------|----------|----------|----------|-----------|------------------|---------------------|------------------|\n");
 for r = sim
   if (isempty (r.vn))
     vn = "not run";
@@ -153,8 +157,8 @@ for r = sim
     ode = sprintf ("%.4g", r.ode);
     ocount = sprintf ("%d/%d", r.odes.steps, r.odes.rhs);
   endif
-  printf ("| %-5d | %-8s | %-8s | %-8.4g | %-8s | %-8s | %-9s | %-16s | %-19s | %-16s |\n",
-          r.N, vn, vc, r.fl.wall, ode, ratio, oratio, vcount,
+  printf ("| %-5d | %-8s | %-8.4g | %-8s | %-8.4g | %-8s | %-8s | %-9s | %-16s | %-19s | %-16s |\n",
+          r.N, vn, r.allwall, vc, r.fl.wall, ode, ratio, oratio, vcount,
           sprintf ("%d/%d/%d", r.fl.steps, r.fl.rhs, r.fl.jac), ocount);
 endfor
 printf ("\nfloor solver: %s\n",
@@ -199,3 +203,7 @@ endif
 printf ("(peak RSS growth is VmHWM after minus before the N runs; 0 when an earlier N already reached that peak)\n");
 
 steady_bench (ran);
+
+## 3. Fitting three coefficients to two step tests (bench/fit_bench.m)
+printf ("\n3. Fit: vn_fit against fminsearch over ode15s (same model, same data)\n\n");
+run (fullfile (fileparts (mfilename ("fullpath")), "fit_bench.m"));

@@ -198,21 +198,39 @@ function [idx, names] = record_list (net, record)
     names = record(:).';
   endif
   idx = zeros (1, numel (names), "int32");
+  layout = vn_quantity (net);
+  if (ischar (record))
+    ## every tank's level: output 0 of each tank's block
+    idx(:) = layout.ooff(tanks);
+    return;
+  endif
   for j = 1:numel (names)
-    q = vn_quantity (net, names{j}, "output", "vn_simulate");
+    q = vn_quantity (net, names{j}, "output", "vn_simulate", layout);
     idx(j) = q.index;
   endfor
 endfunction
 
 ## A result holding only the recorded outputs.
 function res = recorded (t, X, Y, states, names)
-  res.t = t(:);
-  for j = 1:numel (names)
-    dot = find (names{j} == ".", 1);
-    res.(names{j}(1:dot-1)).(names{j}(dot+1:end)) = Y(:, j);
+  ## grouped by unit and made in one step (many units: no growing struct)
+  dots = cellfun (@(n) find (n == ".", 1), names);
+  units = arrayfun (@(j) names{j}(1:dots(j)-1), 1:numel (names),
+                    "uniformoutput", false);
+  vars = arrayfun (@(j) names{j}(dots(j)+1:end), 1:numel (names),
+                   "uniformoutput", false);
+  [uu, ia, gs] = unique (units);      # first-seen order kept below
+  [~, ord] = sort (ia);
+  rank(ord) = 1:numel (ord);
+  un = uu(ord);
+  g = rank(gs);
+  cols = num2cell (Y, 1);
+  per = cell (1, numel (un));
+  for i = 1:numel (un)
+    j = find (g == i);
+    per{i} = cell2struct (cols(j).', vars(j).', 1);
   endfor
-  res.x = X;
-  res.states = states;
+  res = cell2struct ([{t(:)}, per, {X}, {states}].',
+                     [{"t"}, un, {"x"}, {"states"}].', 1);
 endfunction
 
 function x0 = initial_state (init)
