@@ -181,7 +181,7 @@ for r = sim(1:2)
           max (d(:)), max (d(:)) / max (abs (ref(:,2:end))(:)));
 endfor
 
-printf ("\nNetwork building (builders in a loop) and memory\n\n");
+printf ("\nNetwork building (one bulk builder call per kind) and memory\n\n");
 printf ("| N     | build (s) | result bytes | bytes/(N x 721) | peak RSS growth (MB) |\n");
 printf ("|-------|-----------|--------------|-----------------|----------------------|\n");
 for r = sim
