@@ -43,7 +43,20 @@ typedef struct sim {
   double *ycache;
   int cached;
   record rec;
+  char cvmsg[256];  /* the integrator's own last complaint */
 } sim;
+
+/* CVODES reports trouble here instead of on stderr: the message joins
+ * vesselnet's own diagnosis. */
+static void cv_err (int code, const char *module, const char *function,
+                    char *msg, void *ud)
+{
+  (void) code;
+  (void) module;
+  (void) function;
+  sim *S = ud;
+  snprintf (S->cvmsg, sizeof S->cvmsg, "%s", msg);
+}
 
 /* Root functions: one per switch, crossing upwards when it must act. */
 static int cv_root (sunrealtype t, N_Vector y, sunrealtype *g, void *ud)
@@ -320,6 +333,12 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
         return vn_fail (net, VN_EINTR, "simulate: interrupted at t = %.6g s",
                         *tr);
       diagnose (net, mem, y, flag, *tr);
+      if (S->cvmsg[0] && !S->rhs_fail)
+        {
+          size_t n = strlen (net->msg);
+          snprintf (net->msg + n, sizeof net->msg - n, " [CVODES: %s]",
+                    S->cvmsg);
+        }
       return VN_ESOLVER;
     }
   if (flag != CV_ROOT_RETURN)
@@ -394,7 +413,11 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   if (st)
     return st;
 
-  sim S = {net, 0, 0, 0, NULL, NULL, sens, NULL, 0, NULL, 0, {0, NULL, 1, NULL}};
+  sim S;
+  memset (&S, 0, sizeof S);
+  S.net = net;
+  S.sens = sens;
+  S.rec.nodes_only = 1;
   if (opt.nyrec > 0)
     {
       S.rec.unit = malloc ((size_t) opt.nyrec * sizeof *S.rec.unit);
@@ -513,6 +536,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   if ((flag = CVodeInit (mem, cv_rhs, tout[0], y)) != CV_SUCCESS
       || (flag = CVodeSStolerances (mem, rtol, atol)) != CV_SUCCESS
       || (flag = CVodeSetUserData (mem, &S)) != CV_SUCCESS
+      || (flag = CVodeSetErrHandlerFn (mem, cv_err, &S)) != CV_SUCCESS
       || (flag = CVodeSetMaxNumSteps (mem, maxsteps)) != CV_SUCCESS
       || (opt.hmax > 0 && (flag = CVodeSetMaxStep (mem, opt.hmax)) != CV_SUCCESS)
       || (S.nsw && (flag = CVodeRootInit (mem, S.nsw, cv_root)) != CV_SUCCESS))
