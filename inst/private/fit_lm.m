@@ -23,10 +23,16 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
       break;
     endif
     accepted = false;
+    tiny = false;
     while (lambda < 1e16)
       step = - (H + lambda * diag (d)) \ g;
       tn = min (max (theta + step, lo(:)), hi(:));
-      rn = fun (tn);
+      if (norm (tn - theta, Inf) <= opt.tol)
+        tiny = true;                    # nothing left to gain
+        break;
+      endif
+      ## the trial carries its Jacobian: once accepted, no second run
+      [rn, Jn] = fun (tn);
       fn = rn' * rn;
       if (isfinite (fn) && fn < f)
         accepted = true;
@@ -34,6 +40,11 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
       endif
       lambda *= 10;
     endwhile
+    if (tiny)
+      reason = "relative change of the parameters below tolerance";
+      it -= 1;
+      break;
+    endif
     if (! accepted)
       reason = "no step lowers the sum of squares (at the minimum to working precision)";
       it -= 1;                          # a failed search is no iteration
@@ -42,8 +53,9 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
     dtheta = norm (tn - theta, Inf);
     df = (f - fn) / max (f, realmin);
     theta = tn;
-    [r, J] = fun (theta);
-    f = r' * r;
+    r = rn;
+    J = Jn;
+    f = fn;
     lambda = max (lambda / 10, 1e-12);
     if (opt.verbose)
       printf ("vn_fit: iteration %3d  sum of squares %.6g  step %.3g (log)  lambda %.2g\n",

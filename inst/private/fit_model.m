@@ -23,8 +23,10 @@ function [Y, S] = fit_model (net, e, pq, p, so)
   np = numel (pq);
   pk = vn_pack (net);
   if (strcmp (e.start, "steady"))
-    op = vn_steady (net);
-    x0 = op.x;
+    ## the core's Newton directly: vn_steady's result struct is not needed
+    so_ss = struct ("maxiter", 60, "tol", 1e-10, "solver", 0, "simulate", true);
+    x0 = __vn_steady__ (pk, [], zeros (1, 0, "int32"), zeros (1, 0, "int32"),
+                        zeros (1, 0), so_ss);
     if (want)
       [A, B] = __vn_linearize__ (pk, x0, pin, e.yidx, false);
       sx0 = - (full (A) \ full (B));
@@ -41,8 +43,10 @@ function [Y, S] = fit_model (net, e, pq, p, so)
     endif
   endif
   sig = vn_pack_signals (net, e.u, "vn_fit");
+  ## only the measured outputs are recorded
   o = struct ("reltol", so.reltol, "abstol", so.abstol, "solver", so.solver,
-              "maxsteps", so.maxsteps, "maxstep", so.maxstep);
+              "maxsteps", so.maxsteps, "maxstep", so.maxstep,
+              "record", e.yidx);
   if (want)
     o.sens = pin;
     o.sens_x0 = sx0;
@@ -52,7 +56,7 @@ function [Y, S] = fit_model (net, e, pq, p, so)
   else
     [~, Yall] = __vn_simulate__ (pk, sig, e.t, x0, o);
   endif
-  Y = Yall(:, double (e.yidx) + 1);
+  Y = Yall;
 endfunction
 
 ## Initial state from declared levels with one parameter changed.
