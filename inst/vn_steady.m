@@ -287,22 +287,17 @@ endfunction
 
 ## The result struct: unit fields as scalars, inputs, spilling tanks.
 function op = operating_point (net, x, y, states)
+  ## one time point: every field of the result is already a scalar
   res = vn_results (net, 0, x(:).', y(:).', states, []);
-  op = struct ();
+  op = rmfield (res, intersect (fieldnames (res), {"t", "x", "states", "units"}));
   names = {};
   values = [];
   inputs = struct ();
   s = vn_schema ();
-  op.spilling = cell (0, 1);
-  op.spill = zeros (0, 1);
-  for i = 1:numel (net.units)
+  kinds = {net.units.kind};
+  for i = find (! strcmp (kinds, "tank"))
     un = net.units(i);
     r = res.(un.name);
-    f = fieldnames (r);
-    for j = 1:numel (f)
-      r.(f{j}) = r.(f{j})(1);
-    endfor
-    op.(un.name) = r;
     k = s.(un.kind);
     for j = find (k.isinput)
       if (! isfield (r, k.params{j}))
@@ -315,11 +310,11 @@ function op = operating_point (net, x, y, states)
         inputs.(un.name).(k.params{j}) = v;
       endif
     endfor
-    if (strcmp (un.kind, "tank") && r.spill > 0)
-      op.spilling{end+1, 1} = un.name;
-      op.spill(end+1, 1) = r.spill;
-    endif
   endfor
+  tanks = {net.units(strcmp (kinds, "tank")).name};
+  spill = cellfun (@(n) res.(n).spill, tanks);
+  op.spilling = tanks(spill > 0).';
+  op.spill = spill(spill > 0).';
   op.x = x(:);
   op.states = states;
   op.units = res.units;
