@@ -146,17 +146,10 @@ endfunction
 
 function opt = parse_options (args)
   opt = struct ("sparse", false, "dense", false, "poles", [], "loop", "closed");
-  if (mod (numel (args), 2) != 0)
-    error ("Octave:invalid-input-arg",
-           "vn_linearize: options come in name/value pairs");
-  endif
-  for i = 1:2:numel (args)
-    name = args{i};
-    val = args{i+1};
-    if (! ischar (name))
-      error ("Octave:invalid-input-arg",
-             "vn_linearize: option names must be strings");
-    endif
+  [names, vals] = vn_option_pairs (args, "vn_linearize");
+  for i = 1:numel (names)
+    name = names{i};
+    val = vals{i};
     switch (lower (name))
       case {"sparse", "dense", "poles"}
         if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
@@ -275,20 +268,10 @@ endfunction
 %!shared net, op
 %! ## Square-root tank: A 2 m2, h_s 1.5 m, F_s 0.01 m3/s, coefficient so
 %! ## that h_s is the steady level.
-%! net.type = "vesselnet.network";
-%! net.name = "one tank";
-%! net.options = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
-%!                       "ambient", 15, "thermal", false, "species", {{}},
-%!                       "decay", [], "smooth", 1e-3);
-%! net.units = struct ("name", {"T1", "O1", "F1"},
-%!                     "kind", {"tank", "orifice", "feed"},
-%!                     "from", {"", "T1", ""}, "to", {"", "", "T1"},
-%!                     "par", {struct("area", 2, "level", 1.5), ...
-%!                             struct("coeff", 0.01/sqrt(1.5)), ...
-%!                             struct("flow", 0.01)},
-%!                     "table", {[], [], []},
-%!                     "aux", {struct(), struct(), struct()});
-%! net.index = struct ("T1", 1, "O1", 2, "F1", 3);
+%! net = vn_network ("one tank");
+%! net = vn_tank (net, "T1", "area", 2, "level", 1.5);
+%! net = vn_orifice (net, "O1", "T1", "", "coeff", 0.01 / sqrt (1.5));
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
 %! op = struct ("x", 3, "net", net, "states", {{"T1.volume"}});
 
 %!test

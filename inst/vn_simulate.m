@@ -131,17 +131,10 @@ function opt = parse_options (args)
   opt = struct ("dt", [], "initial", [], "reltol", 1e-6, "abstol", 1e-8,
                 "solver", 0, "maxsteps", 100000, "maxstep", 0,
                 "verbose", false, "record", []);
-  if (mod (numel (args), 2) != 0)
-    error ("Octave:invalid-input-arg",
-           "vn_simulate: options come in name/value pairs");
-  endif
-  for i = 1:2:numel (args)
-    name = args{i};
-    val = args{i+1};
-    if (! ischar (name))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: option names must be strings");
-    endif
+  [names, vals] = vn_option_pairs (args, "vn_simulate");
+  for i = 1:numel (names)
+    name = names{i};
+    val = vals{i};
     switch (lower (name))
       case "dt"
         opt.dt = val;

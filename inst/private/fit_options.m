@@ -7,17 +7,10 @@ function opt = fit_options (args, np)
   opt = struct ("lower", zeros (np, 1), "upper", Inf (np, 1), "maxiter", 50,
                 "tol", 1e-6, "reltol", 1e-8, "abstol", 1e-10,
                 "verbose", false);
-  if (mod (numel (args), 2) != 0)
-    error ("Octave:invalid-input-arg",
-           "vn_fit: options come in name/value pairs");
-  endif
-  for i = 1:2:numel (args)
-    name = args{i};
-    val = args{i+1};
-    if (! ischar (name))
-      error ("Octave:invalid-input-arg",
-             "vn_fit: option names must be strings");
-    endif
+  [names, vals] = vn_option_pairs (args, "vn_fit");
+  for i = 1:numel (names)
+    name = names{i};
+    val = vals{i};
     switch (lower (name))
       case {"lower", "upper"}
         if (! (isnumeric (val) && isreal (val)

@@ -8,17 +8,10 @@
 function opt = plot_options (args)
   opt = struct ("file", "", "title", [], "figure", [], "time", "auto",
                 "color", false, "size", [900 600]);
-  if (mod (numel (args), 2) != 0)
-    error ("Octave:invalid-input-arg",
-           "vn_plot: options come in name/value pairs");
-  endif
-  for i = 1:2:numel (args)
-    name = args{i};
-    val = args{i+1};
-    if (! ischar (name))
-      error ("Octave:invalid-input-arg",
-             "vn_plot: option names must be strings");
-    endif
+  [names, vals] = vn_option_pairs (args, "vn_plot");
+  for i = 1:numel (names)
+    name = names{i};
+    val = vals{i};
     switch (lower (name))
       case "file"
         if (! ischar (val) || isempty (val) || rows (val) != 1)
