@@ -454,12 +454,14 @@ static int check_outlets (vn_net *net)
       if (pump && is_boundary (net, s) && is_tank (net, d))
         in[d] += 1;  /* a pump from a main: inflow of unknown size */
     }
-  /* propagate along links and spills until nothing changes */
-  for (int changed = 1; changed;)
+  /* propagate along links and spills until nothing changes; sweeps go
+   * forwards and backwards in turn, so a chain takes two, not N */
+  for (int changed = 1, pass = 0; changed; pass++)
     {
       changed = 0;
-      for (int i = 0; i < nu; i++)
+      for (int ii = 0; ii < nu; ii++)
         {
+          int i = (pass % 2) ? nu - 1 - ii : ii;
           const vn_unit *u = &net->u[i];
           int s = u->ref[0], d = u->ref[1];
           if (u->k == &vn_kind_tank && has_rim (u) && s >= 0
