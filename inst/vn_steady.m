@@ -345,29 +345,19 @@ endfunction
 %! op = vn_steady (net, "target", {"T2.level", 1.5}, "adjust", {"F1.flow"});
 %! printf ("feed for T2 at 1.5 m: %.5f m3/s\n", op.adjusted.F1.flow);
 
-%!function net = hand_net (spec, opts)
-%!  ## spec rows: {name, kind, from, to, par}
-%!  net.type = "vesselnet.network";
-%!  net.name = "t";
-%!  net.options = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
-%!                        "ambient", 15, "thermal", false, "species", {{}},
-%!                        "decay", [], "smooth", 1e-3);
-%!  n = rows (spec);
-%!  net.units = struct ("name", spec(:,1)', "kind", spec(:,2)',
-%!                      "from", spec(:,3)', "to", spec(:,4)',
-%!                      "par", spec(:,5)', "table", cell (1, n),
-%!                      "aux", repmat ({struct()}, 1, n));
-%!  net.index = struct ();
-%!  for i = 1:n
-%!    net.index.(spec{i,1}) = i;
-%!  endfor
+%!function net = one_tank (with_feed)
+%!  ## Torricelli tank: area 2 m2, orifice coeff 0.01, optional feed 0.01
+%!  net = vn_network ("t");
+%!  net = vn_tank (net, "T1", "area", 2, "level", 1);
+%!  net = vn_orifice (net, "O1", "T1", "", "coeff", 0.01);
+%!  if (with_feed)
+%!    net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%!  endif
 %!endfunction
 
 %!test
 %! ## Orifice law F = c sqrt(h): steady level h = (F/c)^2 (Torricelli).
-%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
-%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
-%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! net = one_tank (true);
 %! op = vn_steady (net);
 %! assert (op.T1.level, 1.0, 1e-9);
 %! assert (op.O1.flow, 0.01, 1e-12);
@@ -384,9 +374,7 @@ endfunction
 
 %!test
 %! ## Inverse: the feed holding h = 2.25 m is c sqrt(h) = 0.015 (Torricelli).
-%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
-%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
-%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! net = one_tank (true);
 %! op = vn_steady (net, "target", {"T1.level", 2.25}, "adjust", "F1.flow");
 %! assert (op.adjusted.F1.flow, 0.015, 1e-10);
 %! assert (op.T1.level, 2.25, 1e-9);
@@ -407,17 +395,13 @@ endfunction
 %! ## pump held off: the orifice passes the feed, h = (F/c)^2
 %! assert (op.S1.level, (0.004 / 0.002)^2, 1e-8);
 %!error <2 target\(s\) but 1 adjusted>
-%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
-%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01);
-%!                  "F1", "feed", "", "T1", struct("flow", 0.01)});
+%! net = one_tank (true);
 %! vn_steady (net, "target", {"T1.level", 2, "T1.volume", 4}, "adjust", {"F1.flow"});
 %!error <no unit "T9">
-%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
-%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01)});
+%! net = one_tank (false);
 %! vn_steady (net, "T9.flow", 0.1);
 %!error <unknown option "speed">
-%! net = hand_net ({"T1", "tank", "", "", struct("area", 2, "level", 1);
-%!                  "O1", "orifice", "T1", "", struct("coeff", 0.01)});
+%! net = one_tank (false);
 %! vn_steady (net, "speed", 0.1);
 %!error <Invalid call>
 %! vn_steady ();

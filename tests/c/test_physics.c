@@ -1,5 +1,5 @@
 /* The core against closed-form results of hydraulics and vessel geometry,
- * with the published worked values of /work/shared/REFERENCES.md. */
+ * with the published worked values of REFERENCES.md (shared project notes). */
 #include "vn_test.h"
 
 #define G0 9.80665   /* standard gravity, exact (3rd CGPM, 1901) */
