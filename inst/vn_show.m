@@ -46,7 +46,7 @@ function s = vn_show (net)
     for i = 1:n
       lines{end+1} = sprintf (fmt, rowsc{i,:});
     endfor
-    inp = inputs (U);
+    inp = inputs (net);
     if (! isempty (inp))
       lines{end+1} = "inputs:";
       wq = max (cellfun (@numel, inp(:,1)));
@@ -154,10 +154,18 @@ function uom = unit_of (kind, name)
 endfunction
 
 ## Inputs signals may drive: {quantity, value text}; defaults are marked.
-function inp = inputs (U)
+function inp = inputs (net)
+  U = net.units;
   table = {"feed", "flow", 0; "valve", "opening", 1; "pump", "speed", 1;
            "boundary", "head", NaN; "heater", "duty", 0;
            "controller", "setpoint", NaN};
+  ## inputs a controller or switch sets: say which
+  driven = struct ("q", {}, "by", {});
+  for i = 1:numel (U)
+    if (any (strcmp (U(i).kind, {"controller", "switch"})))
+      driven(end+1) = struct ("q", U(i).aux.manipulate, "by", U(i).name);
+    endif
+  endfor
   inp = cell (0, 2);
   for i = 1:numel (U)
     k = find (strcmp (U(i).kind, table(:,1)), 1);
@@ -174,6 +182,32 @@ function inp = inputs (U)
       val = "(not set)";
     endif
     inp(end+1,:) = {[U(i).name "." p], val};
+    ## what a feed or boundary carries: temperature, concentrations
+    if (any (strcmp (U(i).kind, {"feed", "boundary"})))
+      if (net.options.thermal)
+        if (isfield (U(i).par, "temperature"))
+          tv = sprintf ("%g degC", U(i).par.temperature);
+        else
+          tv = sprintf ("%g degC (ambient)", net.options.ambient);
+        endif
+        inp(end+1,:) = {[U(i).name ".temperature"], tv};
+      endif
+      for k = 1:numel (net.options.species)
+        sp = net.options.species{k};
+        if (isfield (U(i).aux, "species") && isfield (U(i).aux.species, sp))
+          cv = sprintf ("%g", U(i).aux.species.(sp));
+        else
+          cv = "0 (default)";
+        endif
+        inp(end+1,:) = {[U(i).name "." sp], cv};
+      endfor
+    endif
+  endfor
+  for j = 1:numel (driven)
+    r = find (strcmp (inp(:,1), driven(j).q), 1);
+    if (! isempty (r))
+      inp{r,2} = [inp{r,2} " (set by " driven(j).by ")"];
+    endif
   endfor
 endfunction
 
@@ -235,5 +269,18 @@ endfunction
 %! s = vn_show (vn_network ());
 %! assert (! isempty (strfind (s, "0 units")));
 
+%!test
+%! ## carried inputs of feeds, and inputs a controller sets
+%! net = vn_network ("w", "thermal", true, "ambient", 15, "species", {"chlorine"});
+%! net = vn_tank (net, "T1", "area", 4, "level", 2);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01, "chlorine", 1.8);
+%! net = vn_heater (net, "H1", "T1", "duty", 2e4);
+%! net = vn_orifice (net, "O1", "T1", "", "coeff", 0.01);
+%! net = vn_controller (net, "TC1", "measure", "T1.temperature", "manipulate", ...
+%!                      "H1.duty", "setpoint", 40, "gain", 1e4, "limits", [0 5e4]);
+%! s = vn_show (net);
+%! assert (! isempty (strfind (s, "F1.temperature  15 degC (ambient)")));
+%! assert (! isempty (strfind (s, "F1.chlorine     1.8")));
+%! assert (! isempty (strfind (s, "(set by TC1)")));
 %!error <Invalid call> vn_show ()
 %!error <vn_show: NET must be a network made by vn_network, got a 1x1 struct> vn_show (struct ("type", "x"))
