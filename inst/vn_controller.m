@@ -59,14 +59,8 @@ function net = vn_controller (net, name, varargin)
   loop_check_net (net, name, fn);
   allowed = {"measure", "manipulate", "setpoint", "gain", "reset", "deriv", ...
              "action", "limits", "bias", "filter", "antiwindup", "alpha"};
-  o = loop_options (varargin, allowed, fn, name);
-  for req = {"measure", "manipulate", "setpoint", "gain"}
-    if (! isfield (o, req{1}))
-      error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": %s is required", fn, name,
-             upper (req{1}));
-    endif
-  endfor
+  o = loop_options (varargin, allowed, fn, name, "controller",
+                    {"measure", "manipulate", "setpoint", "gain"});
   aux = loop_refs (net, name, o, fn);
   par = struct ();
   par.setpoint = loop_scalar (o.setpoint, "setpoint", name, fn, false);

@@ -26,13 +26,7 @@ function net = vn_switch (net, name, varargin)
   fn = "vn_switch";
   loop_check_net (net, name, fn);
   o = loop_options (varargin, {"measure", "manipulate", "on", "off", "values"},
-                    fn, name);
-  for req = {"measure", "manipulate", "on", "off"}
-    if (! isfield (o, req{1}))
-      error ("Octave:invalid-input-arg",
-             "%s: switch \"%s\": %s is required", fn, name, upper (req{1}));
-    endif
-  endfor
+                    fn, name, "switch", {"measure", "manipulate", "on", "off"});
   par.on = loop_scalar (o.on, "on", name, fn, false);
   par.off = loop_scalar (o.off, "off", name, fn, false);
   if (par.on == par.off)

@@ -1,9 +1,10 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{o} =} loop_options (@var{args}, @var{allowed}, @var{fn}, @var{name})
-## Parse name/value options of vn_controller / vn_switch into a struct.
+## @deftypefn {} {@var{o} =} loop_options (@var{args}, @var{allowed}, @var{fn}, @var{name}, @var{kind}, @var{required})
+## Parse name/value options of vn_controller / vn_switch / vn_heater into a
+## struct; options in @var{required} must be present.
 ## @end deftypefn
 
-function o = loop_options (args, allowed, fn, name)
+function o = loop_options (args, allowed, fn, name, kind, required)
   o = struct ();
   if (mod (numel (args), 2) != 0)
     error ("Octave:invalid-input-arg",
@@ -23,4 +24,12 @@ function o = loop_options (args, allowed, fn, name)
     endif
     o.(lower (key)) = args{i+1};
   endfor
+  if (nargin > 5)
+    for req = required
+      if (! isfield (o, req{1}))
+        error ("Octave:invalid-input-arg", "%s: %s \"%s\": %s is required",
+               fn, kind, name, upper (req{1}));
+      endif
+    endfor
+  endif
 endfunction

@@ -48,16 +48,6 @@ static double worst (const double *a, const double *d, int nr, int nc,
   return w;
 }
 
-/* Rounding noise of a central difference with step h of values of size
- * fs: a few hundred ulps of fs over h. */
-static double fd_noise (const double *v, int n, double h)
-{
-  double fs = 0;
-  for (int i = 0; i < n; i++)
-    fs = fmax (fs, fabs (v[i]));
-  return 256 * 2.2e-16 * fs / h;
-}
-
 /* "unit.name" of parameter index pi, or of output index yi. */
 static const char *pname (const vt_net *b, const vn_net *net, int pi)
 {
@@ -68,20 +58,6 @@ static const char *pname (const vt_net *b, const vn_net *net, int pi)
         {
           snprintf (buf, sizeof buf, "%s.%s", b->name[u],
                     vn_kind_param (b->kind[u], s)->name);
-          return buf;
-        }
-  return "?";
-}
-
-static const char *yname (const vt_net *b, const vn_net *net, int yi)
-{
-  static char buf[128];
-  for (int u = 0; u < b->n; u++)
-    for (int s = 0; s < vn_kind_nout (b->kind[u]); s++)
-      if (vn_output_index (net, u, s) == yi)
-        {
-          snprintf (buf, sizeof buf, "%s.%s", b->name[u],
-                    vn_kind_out_name (b->kind[u], s));
           return buf;
         }
   return "?";
@@ -246,7 +222,7 @@ static void check_net (const char *label, vt_net *b, const double *xset)
   VT_CHECK (w <= TOL, "%s: C = dy/dx vs differences, worst %.2e", label, w);
   if (w > TOL)
     printf ("    worst at output %s, state %d: analytic %.10g, difference "
-            "%.10g\n", yname (b, net, wr), wc, C[wc * ny + wr],
+            "%.10g\n", vt_yname (b, net, wr), wc, C[wc * ny + wr],
             Cfd[wc * ny + wr]);
 
   int nsided = 0;
@@ -282,8 +258,8 @@ static void check_net (const char *label, vt_net *b, const double *xset)
             Dfd[j * ny + i] = s * (-3 * y0[i] + 4 * yp[i] - y2[i]) / (2 * h);
         }
       vn_param_set (net, pi, v);
-      bnoise[j] = fd_noise (f0, nx, h);
-      dnoise[j] = fd_noise (y0, ny, h);
+      bnoise[j] = vt_noise (f0, nx, h);
+      dnoise[j] = vt_noise (y0, ny, h);
     }
   w = worst (B, Bfd, nx, nin, bnoise, &wr, &wc);
   VT_CHECK (w <= TOL, "%s: B = df/dp vs differences over %d parameters (%d "
@@ -296,7 +272,7 @@ static void check_net (const char *label, vt_net *b, const double *xset)
   VT_CHECK (w <= TOL, "%s: D = dy/dp vs differences, worst %.2e", label, w);
   if (w > TOL)
     printf ("    worst at output %s, parameter %s: analytic %.10g, "
-            "difference %.10g\n", yname (b, net, wr),
+            "difference %.10g\n", vt_yname (b, net, wr),
             pname (b, net, pin[wc]), D[wc * ny + wr], Dfd[wc * ny + wr]);
   vn_net_free (net);
 }

@@ -51,32 +51,6 @@ static double worst (const double *a, const double *d, int nr, int nc,
   return w;
 }
 
-/* A central difference's rounding noise: some hundred ulps of the
- * largest value over the step. */
-static double noise_of (const double *v, int n, double h)
-{
-  double m = 0;
-  for (int i = 0; i < n; i++)
-    if (isfinite (v[i]))
-      m = fmax (m, fabs (v[i]));
-  return 256 * 2.2e-16 * m / h;
-}
-
-/* "unit.output" of output index yi, for failure lines. */
-static const char *yname (const vt_net *b, const vn_net *net, int yi)
-{
-  static char buf[96];
-  for (int u = 0; u < b->n; u++)
-    for (int k = 0; k < vn_kind_nout (b->kind[u]); k++)
-      if (vn_output_index (net, u, k) == yi)
-        {
-          snprintf (buf, sizeof buf, "%s.%s", b->name[u],
-                    vn_kind_out_name (b->kind[u], k));
-          return buf;
-        }
-  return "?";
-}
-
 /* Values f and y with parameter pi at v (the value kept afterwards). */
 static int eval_p (vn_net *net, int pi, double v, const double *x, double *f,
                    double *y)
@@ -176,7 +150,7 @@ static void check_net (const char *label, vt_net *b, const double *xset,
             label, w);
   if (w > TOL)
     printf ("    output %s, state %d: analytic %.10g, difference %.10g\n",
-            yname (b, net, wr), wc, C[wc * ny + wr], Cd[wc * ny + wr]);
+            vt_yname (b, net, wr), wc, C[wc * ny + wr], Cd[wc * ny + wr]);
   if (np == 0)
     {
       vn_net_free (net);
@@ -192,8 +166,8 @@ static void check_net (const char *label, vt_net *b, const double *xset,
         Bd[j * nx + i] = bad ? NAN : (fp[i] - fm[i]) / (2 * h);
       for (int i = 0; i < ny; i++)
         Dd[j * ny + i] = bad ? NAN : (yp[i] - ym[i]) / (2 * h);
-      bn[j] = noise_of (fp, nx, h);
-      dn[j] = noise_of (yp, ny, h);
+      bn[j] = vt_noise (fp, nx, h);
+      dn[j] = vt_noise (yp, ny, h);
       VT_CHECK (!bad, "%s: %s.%s moves by %.3g both ways", label,
                 b->name[mv[j].unit], mv[j].name, h);
     }
@@ -209,7 +183,7 @@ static void check_net (const char *label, vt_net *b, const double *xset,
             label, w);
   if (w > TOL)
     printf ("    output %s, parameter %s.%s: analytic %.10g, difference "
-            "%.10g\n", yname (b, net, wr), b->name[mv[wc].unit], mv[wc].name,
+            "%.10g\n", vt_yname (b, net, wr), b->name[mv[wc].unit], mv[wc].name,
             D[wc * ny + wr], Dd[wc * ny + wr]);
   vn_net_free (net);
 

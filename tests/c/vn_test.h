@@ -159,4 +159,32 @@ static inline int vt_yidx (const vt_net *b, const vn_net *net, int u,
   return -1;
 }
 
+
+/* Rounding noise of a central difference with step h over values v: a
+ * few hundred ulps of the largest finite value, over h. */
+static inline double vt_noise (const double *v, int n, double h)
+{
+  double m = 0;
+  for (int i = 0; i < n; i++)
+    if (isfinite (v[i]))
+      m = fmax (m, fabs (v[i]));
+  return 256 * 2.2e-16 * m / h;
+}
+
+/* "unit.output" of output index yi, for failure lines. */
+static inline const char *vt_yname (const vt_net *b, const vn_net *net,
+                                    int yi)
+{
+  static char buf[128];
+  for (int u = 0; u < b->n; u++)
+    for (int k = 0; k < vn_kind_nout (b->kind[u]); k++)
+      if (vn_output_index (net, u, k) == yi)
+        {
+          snprintf (buf, sizeof buf, "%s.%s", b->name[u],
+                    vn_kind_out_name (b->kind[u], k));
+          return buf;
+        }
+  return "?";
+}
+
 #endif
