@@ -40,6 +40,6 @@ endfunction
 %!assert (sim_times ([0 10], 4, "f"), [0; 4; 8; 10])
 %!assert (sim_times ([0 10], [], "f")(2), 0.02)
 %!assert (sim_times ([1 2 5], [], "f"), [1; 2; 5])
-%!error <f: TSPAN \[t0 tf\] needs tf > t0> sim_times ([2 1], 1, "f")
+%!error <f: TSPAN \[t0 tf\] needs tf . t0> sim_times ([2 1], 1, "f")
 %!error <f: output times must increase> sim_times ([1 3 2], 1, "f")
 %!error <f: option "dt" must be a positive> sim_times ([0 1], -1, "f")
