@@ -84,23 +84,13 @@ function si = unit_of_var (net, u, var)
   endif
 endfunction
 
-## "a/b" with compound parts in brackets; "1/b" for a dimensionless a.
+## Output unit per measured unit; a dimensionless measurement adds nothing.
 function s = per (a, b)
-  if (isempty (a) || isempty (b))
-    s = "";
-    return;
-  endif
   if (strcmp (b, "1"))
     s = a;
-    return;
+  else
+    s = report_per (a, b);
   endif
-  if (any (a == "/"))
-    a = ["(" a ")"];
-  endif
-  if (any (b == "/"))
-    b = ["(" b ")"];
-  endif
-  s = [a "/" b];
 endfunction
 
 %!shared net
