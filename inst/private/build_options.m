@@ -73,8 +73,14 @@ function [par, aux, given] = build_options (fn, label, args, spec)
       else
         si = spec{k,3};
       endif
-      v = units_value (fn, label, key, v, si);
-      shown = sprintf ("%s (%.6g%s)", shown, v, with_space (spec{k,3}));
+      [~, ~, ok] = units_text (v);
+      if (ok)
+        v = units_value (fn, label, key, v, si);
+        shown = sprintf ("%s (%.6g%s)", shown, v, with_space (spec{k,3}));
+      else
+        shown = sprintf ("%s (give a number, or a text \"VALUE UNIT\" in %s)",
+                         shown, units_allowed (si));
+      endif
     endif
     [ok, what] = check_value (v, spec{k,2}, spec{k,4});
     if (! ok)

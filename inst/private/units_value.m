@@ -34,12 +34,7 @@ function x = units_value (fn, label, field, v, si_unit, difference)
                  build_value_str (v));
   endif
   t = units_table ();
-  k = find (strcmp ({t.dims.si}, si_unit), 1);
-  if (isempty (k))
-    allowed = ["\"VALUE " si_unit "\""];
-  else
-    allowed = ["units of " t.dims(k).name ": " strjoin(t.dims(k).units, ", ")];
-  endif
+  [allowed, k] = units_allowed (si_unit);
   [val, unit, ok] = units_text (v);
   if (! ok)
     build_error (fn, label, ["%s must be a number or a text \"VALUE UNIT\" ", ...
@@ -82,3 +77,4 @@ endfunction
 %!error <f: FLOW "1 furlong/s": "furlong/s" is an unknown unit; FLOW allows units of flow: m3/s> units_value ("f", "", "flow", "1 furlong/s", "m3/s")
 %!error <f: COEFF "1 m3/s": unit "m3/s" is not allowed; COEFF allows "VALUE m2.5/s"> units_value ("f", "", "coeff", "1 m3/s", "m2.5/s")
 %!error <f: FLOW must be a number or a text "VALUE UNIT" \(units of flow: m3/s.*\), got "fast"> units_value ("f", "", "flow", "fast", "m3/s")
+
