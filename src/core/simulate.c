@@ -290,7 +290,7 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
 static void store (vn_net *net, const record *R, int k, int nt, double t,
                    const double *x, double *X, double *Y)
 {
-  for (int i = 0; i < net->nx; i++)
+  for (int i = 0; X && i < net->nx; i++)    /* X NULL: states not kept */
     X[k + (long) nt * i] = x[i];
   if (!Y)
     return;
@@ -436,9 +436,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
               return vn_fail (net, VN_EARG, "simulate: recorded output %d "
                               "has index %d outside the network", j + 1, yi);
             }
-          for (int i = 0; i < net->nu && u < 0; i++)
-            if (yi >= net->u[i].yoff && yi < net->u[i].yoff + net->u[i].nout)
-              u = i;
+          u = vn_output_unit (net, yi);
           S.rec.unit[j] = u;
           S.rec.nodes_only &= net->u[u].k->role == VN_ROLE_NODE;
         }
