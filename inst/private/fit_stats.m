@@ -1,16 +1,18 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{st} =} fit_stats (@var{J}, @var{r}, @var{p}, @var{names})
+## @deftypefn {} {@var{st} =} fit_stats (@var{J}, @var{r}, @var{p}, @var{dp}, @var{names})
 ## Standard errors, 95 % intervals (Student's t) and correlations of a
 ## least-squares fit from the Jacobian @var{J} of the weighted residuals
-## with respect to log p.  The covariance is s^2 (J'J)^-1 with s^2 the
-## residual variance, so the sigmas given need only be right relative to
-## each other.  Warns "vesselnet:fit-ill-conditioned", naming the
+## with respect to the fit's coordinates th (log p or p), @var{dp} = d p /
+## d th.  The covariance of th is s^2 (J'J)^-1 with s^2 the residual
+## variance, so the sigmas given need only be right relative to each
+## other; standard errors of p are |dp| times those of th (first order).  Warns "vesselnet:fit-ill-conditioned", naming the
 ## parameters, when J'J is near-singular or two estimates correlate
 ## beyond 0.99.
 ## @end deftypefn
 
-function st = fit_stats (J, r, p, names)
+function st = fit_stats (J, r, p, dp, names)
   p = p(:);
+  dp = dp(:);
   [m, n] = size (J);
   dof = m - n;
   H = J' * J;
@@ -24,9 +26,8 @@ function st = fit_stats (J, r, p, names)
     s2 = NaN;
   endif
   Cs = pinv (Hs);
-  Cl = s2 * Cs ./ (sc * sc');          # covariance of log p
-  C = Cl .* (p * p');                  # first-order covariance of p
-  se = sqrt (max (diag (C), 0));
+  C = s2 * Cs ./ (sc * sc');           # covariance of th
+  se = abs (dp) .* sqrt (max (diag (C), 0));
   d = sqrt (max (diag (Cs), realmin));
   R = Cs ./ (d * d');
   if (dof > 0)
