@@ -188,6 +188,10 @@ function est = vn_fit (net, ex, params, varargin)
     reason = sprintf ("%s; at a bound: %s", reason,
                       strjoin (params(bound), ", "));
   endif
+  if (any (st.unseen))
+    reason = sprintf ("%s; not seen by the data (no interval): %s", reason,
+                      strjoin (params(st.unseen), ", "));
+  endif
   if (opt.starts > 1)
     reason = sprintf ("%s; best of %d starts (%d reached it, %d failed)",
                       reason, opt.starts, nnz (starts.reached),

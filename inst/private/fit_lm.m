@@ -18,6 +18,10 @@
 ## @end deftypefn
 
 function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
+  ## a parameter the data do not see makes the damped system near-singular;
+  ## the damping still gives a usable step
+  warning ("off", "Octave:singular-matrix", "local");
+  warning ("off", "Octave:nearly-singular-matrix", "local");
   lo = lo(:);
   hi = hi(:);
   maxstep = opt.maxstep(:);
@@ -80,9 +84,6 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
     endif
     if (! accepted)
       reason = "no step lowers the sum of squares (a minimum to working precision)";
-      if (rejected > 0)
-        reason = sprintf ("%s; %d trial step(s) were rejected because the model failed there", reason, rejected);
-      endif
       it -= 1;                          # a failed search is no iteration
       break;
     endif
@@ -106,6 +107,10 @@ function [theta, r, J, info] = fit_lm (fun, theta, lo, hi, opt)
       break;
     endif
   endfor
+  if (rejected > 0)
+    reason = sprintf ("%s; %d trial step(s) were rejected because the model failed there",
+                      reason, rejected);
+  endif
   info.iterations = it;
   info.reason = reason;
   info.ssr = f;
@@ -124,7 +129,8 @@ function [r, J, msg] = trial (fun, theta)
     if (any (strcmp (err.identifier, {"vesselnet:interrupted", "Octave:interrupt"})))
       rethrow (err);
     endif
-    msg = err.message;
+    ## the command that failed inside the fit is not the user's call
+    msg = regexprep (err.message, '^_*vn_\w+?_*: ', '');
     return;
   end_try_catch
   if (! all (isfinite (r)))
@@ -133,3 +139,37 @@ function [r, J, msg] = trial (fun, theta)
     msg = "the sensitivities are not finite";
   endif
 endfunction
+
+%!function [r, J] = fails_past (th)
+%!  global visited
+%!  if (th > 2.5)
+%!    error ("vn_linearize: tank \"T1\": area must lie in [1e-09, 1e+09] (m2), got 0");
+%!  endif
+%!  visited(end+1) = th;
+%!  r = th - 3;
+%!  J = 1;
+%!endfunction
+
+## A quadratic in one coordinate, minimum at 3, whose "model" fails past
+## 2.5: the failing trials are rejected, the fit ends at the edge of the
+## region that runs with no error, and every step is at most 1.
+%!test
+%! global visited
+%! visited = [];
+%! opt = struct ("maxiter", 50, "tol", 1e-8, "verbose", false, "maxstep", 1);
+%! [th, r, J, info] = fit_lm (@fails_past, 0, -Inf, Inf, opt);
+%! assert (th <= 2.5 && th > 2.4);
+%! assert (info.rejected > 0);
+%! assert (info.lastfail, "tank \"T1\": area must lie in [1e-09, 1e+09] (m2), got 0");
+%! assert (max (abs (diff (visited))) <= 1 + 1e-12);
+%! assert (! isempty (strfind (info.reason, "rejected because the model failed")));
+
+## a failure at the start is an error of vn_fit
+%!error <vn_fit: the model cannot be run at the starting values: tank "T1"> fit_lm (@fails_past, 3, -Inf, Inf, struct ("maxiter", 5, "tol", 1e-8, "verbose", false, "maxstep", 1))
+
+## bounds hold: the minimum at 3 lies beyond an upper bound of 1
+%!test
+%! opt = struct ("maxiter", 50, "tol", 1e-10, "verbose", false, "maxstep", 1);
+%! [th, ~, ~, info] = fit_lm (@(x) deal (x - 3, 1), 0, -Inf, 1, opt);
+%! assert (th, 1);
+
