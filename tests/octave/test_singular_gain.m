@@ -178,3 +178,146 @@
 %! endfor
 %! ## most cases hold the catch tank idle
 %! assert (idle >= cases / 2);
+
+%!test
+%! ## Step metrics come from the nonlinear response: a 1 % step on the
+%! ## pump speed.  B1's final change is the nonlinear steady state at the
+%! ## new speed (not gain x step, which differs at this size); the store
+%! ## S1 rises and returns to its level (its outflow must pass the feed),
+%! ## so it does not settle away from zero, nor does the idle catch tank.
+%! net = juice_line ();
+%! op = vn_steady (net, "tol", 1e-14);
+%! sr = vn_stepresponse (net, op, "P1.speed", 1, {"B1.level", "S1.level", "C1.level"},
+%!                       "percent", true);
+%! o2 = vn_steady (net, "P1.speed", 0.808, "initial", op, "tol", 1e-14);
+%! yf = o2.B1.level - op.B1.level;
+%! assert (sr.metrics(1).final, yf, 1e-6 * abs (yf));
+%! assert (sr.metrics(1).gain, yf / 0.008, 1e-6 * abs (yf / 0.008));
+%! assert (abs (sr.lin.gain(1) * 0.008 - yf) > 1e-3 * abs (yf));
+%! assert (sr.metrics(1).settles);
+%! ## the 2 % band around the nonlinear final holds at the settle time on
+%! r = sr.nonlinear(:,1) / yf;
+%! assert (all (abs (r(sr.t > sr.metrics(1).settle + 1e-6) - 1) <= 0.02));
+%! assert (sr.metrics(1).t63 < sr.metrics(1).settle);
+%! assert (max (sr.nonlinear(:,2)) > 0.01);
+%! assert ([sr.metrics(2:3).settles], [false, false]);
+%! assert (isnan ([sr.metrics(2).t63, sr.metrics(2).rise, ...
+%!                 sr.metrics(2).settle, sr.metrics(2).overshoot]));
+%! assert (sr.metrics(2).final, 0, 1e-9);
+%! assert (sr.metrics(3).final, 0);
+
+%!test
+%! ## A record that stops before the response settles: settles is false
+%! ## and its times are NaN, while the final change is still the
+%! ## nonlinear steady state's.
+%! net = juice_line ();
+%! op = vn_steady (net, "tol", 1e-14);
+%! sr = vn_stepresponse (net, op, "F1.flow", 1e-4, "B1.level", "tend", 600);
+%! o2 = vn_steady (net, "F1.flow", 0.0101, "initial", op, "tol", 1e-14);
+%! assert (sr.metrics.final, o2.B1.level - op.B1.level, 1e-6 * sr.metrics.final);
+%! assert (! sr.metrics.settles);
+%! assert (isnan ([sr.metrics.t63, sr.metrics.rise, sr.metrics.settle, ...
+%!                 sr.metrics.overshoot]));
+
+## A sump under a level switch (invented): the pump is held at the
+## output the switch starts with.
+%!function net = sump (level)
+%!  net = vn_network ("sump (invented)");
+%!  net = vn_tank (net, "S1", "area", 2, "level", level);
+%!  net = vn_feed (net, "F1", "S1", "flow", 0.004);
+%!  net = vn_orifice (net, "O1", "S1", "", "coeff", 0.002);
+%!  net = vn_pump (net, "P1", "S1", "", "flow", 0.003, "speed", 0);
+%!  net = vn_switch (net, "LS1", "measure", "S1.level", "manipulate", ...
+%!                   "P1.speed", "on", 1.5, "off", 0.5);
+%!endfunction
+
+%!test
+%! ## Frozen switch, pump off: h = (F/c)^2 = 4 m, gain dh/dF = 2 F/c^2 =
+%! ## 2000 s/m2, tau = 2 A h/F = 4000 s (Torricelli, linearised; Seborg et
+%! ## al., memory); pump on: the orifice passes F - q = 0.001 m3/s, h =
+%! ## 0.25 m, gain 500 s/m2, and the speed draws q per unit speed.
+%! for lv = [0.3, 2]
+%!   net = sump (lv);
+%!   op = vn_steady (net, "freeze", true, "tol", 1e-14);
+%!   assert (op.frozen, {"LS1"});
+%!   lin = vn_linearize (net, op, {"F1.flow", "P1.speed"}, {"S1.level", "O1.flow"});
+%!   assert (lin.states, {"S1.volume"});
+%!   on = lv > 1.5;
+%!   q = 0.004 - 0.003 * on;
+%!   assert (op.S1.level, (q / 0.002)^2, 1e-9);
+%!   assert (lin.gain(1,1), 2 * q / 0.002^2, 1e-6 * 2 * q / 0.002^2);
+%!   assert (lin.tau, 2 * 2 * (q / 0.002)^2 / q, 1e-6 * lin.tau);
+%!   assert (lin.B(1,2), -0.003, 1e-12);
+%!   g = quotient (op.net, op, "F1.flow", {"S1.level"}, 1e-5);
+%!   assert (lin.gain(1,1), g, 1e-6 * g);
+%!   sr = vn_stepresponse (net, op, "F1.flow", 1e-6, "S1.level", "tend", 2e4);
+%!   assert (sr.nonlinear, sr.linear, 1e-3 * abs (sr.linear(end)));
+%!   assert (sr.metrics.gain, 2 * q / 0.002^2, 1e-3 * 2 * q / 0.002^2);
+%! endfor
+%! fail ('vn_linearize (net, op, "F1.flow", "LS1.output")', "held at its output");
+
+## A tank drained by an orifice and a control valve (invented), the valve
+## at a bound of its opening.
+%!function [net, op] = valve_tank (ch, opening)
+%!  net = vn_network ("valve at a bound (invented)");
+%!  net = vn_tank (net, "T1", "area", 2, "level", 1.5);
+%!  net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%!  net = vn_orifice (net, "O1", "T1", "", "coeff", 0.004);
+%!  net = vn_valve (net, "LV1", "T1", "", "kv", 40, "opening", opening, ...
+%!                  "characteristic", ch);
+%!  op = vn_steady (net);
+%!endfunction
+
+## The valve's flow at the operating point's levels, opening v.
+%!function q = valve_flow (net, op, v)
+%!  net.units(net.index.LV1).par.opening = v;
+%!  res = vn_simulate (net, [0 1], "initial", op.x, "record", {"LV1.flow"});
+%!  q = res.LV1.flow(1);
+%!endfunction
+
+%!test
+%! ## Opening 0 (and 1): B and D of the opening are the one-sided
+%! ## derivative from inside the range, checked against a one-sided
+%! ## difference quotient of the valve's flow (definition of the
+%! ## derivative); the tank loses what the valve passes, so B = -D.
+%! for ch = {"linear", "equal", "quick"}
+%!   for v0 = [0, 1]
+%!     [net, op] = valve_tank (ch{1}, v0);
+%!     lin = vn_linearize (net, op, {"LV1.opening"}, {"T1.volume", "LV1.flow"});
+%!     h = 1e-9 * (1 - 2 * v0);
+%!     dq = (valve_flow (net, op, v0 + h) - valve_flow (net, op, v0)) / h;
+%!     assert (abs (dq) > 1e-4);
+%!     assert (lin.D(2,1), dq, 1e-5 * abs (dq));
+%!     assert (lin.B(1,1), -dq, 1e-5 * abs (dq));
+%!     assert (lin.note, "B and D of LV1.opening: one-sided, from inside the range");
+%!   endfor
+%! endfor
+%! ## inside the range nothing changes: the plain derivative, no note
+%! [net, op] = valve_tank ("linear", 0.5);
+%! lin = vn_linearize (net, op, {"LV1.opening"}, {"LV1.flow"});
+%! dq = (valve_flow (net, op, 0.5 + 1e-7) - valve_flow (net, op, 0.5 - 1e-7)) / 2e-7;
+%! assert (lin.D, dq, 1e-6 * dq);
+%! assert (lin.note, "");
+
+%!test
+%! ## vn_fit from a steady start with an idle catch tank beside the pair:
+%! ## the steady-start sensitivities skip the tank no parameter reaches,
+%! ## no singular-matrix warning, and the coefficient is recovered from a
+%! ## noise-free test (invented data).
+%! mk = @(c2) vn_orifice (vn_orifice (vn_feed (vn_tank (vn_tank (vn_tank ( ...
+%!        vn_network ("fit pair"), "C1", "area", 2, "level", 0), ...
+%!        "T1", "area", 1.5, "level", 1), "T2", "area", 1, "level", 0.8, ...
+%!        "rim", 5, "spill", "C1"), "F1", "T1", "flow", 0.004), ...
+%!        "O1", "T1", "T2", "coeff", 0.003), "O2", "T2", "", "coeff", c2);
+%! truth = mk (0.0025);
+%! t = (0:20:2000).';
+%! sg = struct ("quantity", "F1.flow", "t", [0; 200; 200; 2000],
+%!              "v", [0.004; 0.004; 0.006; 0.006], "hold", false, "kind", "table");
+%! op = vn_steady (truth);
+%! res = vn_simulate (truth, t, sg, "initial", op, "reltol", 1e-10, "abstol", 1e-12);
+%! u = 0.004 + 0.002 * (t >= 200);
+%! ex = vn_experiment (t, "F1.flow", u, "T2.level", res.T2.level, "hold", true);
+%! lastwarn ("");
+%! est = vn_fit (mk (0.002), ex, {"O2.coeff"});
+%! assert (lastwarn (), "");
+%! assert (est.value, 0.0025, 1e-4 * 0.0025);
