@@ -207,3 +207,7 @@ steady_bench (ran);
 ## 3. Fitting three coefficients to two step tests (bench/fit_bench.m)
 printf ("\n3. Fit: vn_fit against fminsearch over ode15s (same model, same data)\n\n");
 run (fullfile (fileparts (mfilename ("fullpath")), "fit_bench.m"));
+
+## 4-8. Speed from Octave: call against core, ensembles, large chains,
+## builders, fit with and without the compiled-network cache
+run (fullfile (fileparts (mfilename ("fullpath")), "speed_bench.m"));
