@@ -67,7 +67,7 @@ endif
 nrep = max (1, sb_env ("VN_BENCH_REPEAT", 3));
 big = sb_env ("VN_BENCH_BIG", 100000);
 
-printf ("\n4. Whole vn_simulate call against the core's integration (chain, 0..3600 s, dt 5 s)\n\n");
+printf ("\n5. Whole vn_simulate call against the core's integration (chain, 0..3600 s, dt 5 s)\n\n");
 printf ("| N     | record | core (s)  | call (s)  | call/core | goal | uncached call (s) | uncached/core |\n");
 printf ("|-------|--------|-----------|-----------|-----------|------|-------------------|---------------|\n");
 for N = [2 20 200 2000 20000](1:sb_env ("VN_BENCH_NCALL", 5))
@@ -95,7 +95,7 @@ endfor
 printf ("uncached = VN_COMPILE_CACHE=0: the network packed and its result layout made again at every call,\n");
 printf ("as before the compiled form; its ratio is to its own runs' core time\n");
 
-printf ("\n5. 1000 runs of a two-tank model, O1.coeff varied (600 s, output every 5 s, levels; RelTol 1e-6, AbsTol 1e-8)\n\n");
+printf ("\n6. 1000 runs of a two-tank model, O1.coeff varied (600 s, output every 5 s, levels; RelTol 1e-6, AbsTol 1e-8)\n\n");
 net = sb_pair ();
 u = vn_signal ("F1.flow", "step", 300, 0.01, 0.012);
 randn ("state", 1);
@@ -165,10 +165,10 @@ printf ("goal: vn_ensemble faster than the stacked ode45 call (ratio below 1)\n"
 
 floor_bin = fullfile (root, "build", "bench", "chain_floor");
 if (big > 0 && ! exist (floor_bin, "file"))
-  printf ("\n6. Large chains against the floor: left out, %s is not built (make bench builds it)\n",
+  printf ("\n7. Large chains against the floor: left out, %s is not built (make bench builds it)\n",
           floor_bin);
 elseif (big > 0)
-  printf ("\n6. Large chains against the hand-written floor (0..3600 s, 721 outputs, levels recorded, one run each)\n\n");
+  printf ("\n7. Large chains against the hand-written floor (0..3600 s, 721 outputs, levels recorded, one run each)\n\n");
   printf ("| N      | build (s) | vn core (s) | vn call (s) | floor (s) | core/floor | goal | call/floor | steps vn/floor |\n");
   printf ("|--------|-----------|-------------|-------------|-----------|------------|------|------------|----------------|\n");
   for N = unique ([20000 big])
@@ -189,7 +189,7 @@ elseif (big > 0)
   endfor
 endif
 
-printf ("\n7. Builders against N (bulk form: tanks, feed, orifices of the chain; one call per kind)\n\n");
+printf ("\n8. Builders against N (bulk form: tanks, feed, orifices of the chain; one call per kind)\n\n");
 printf ("| N      | build (s) | us per unit | single calls, loop (s) |\n");
 printf ("|--------|-----------|-------------|------------------------|\n");
 for N = [1000 10000 100000]
@@ -209,7 +209,7 @@ for N = [1000 10000 100000]
 endfor
 printf ("goal: linear in N; 1e5 tanks in under 10 s\n");
 
-printf ("\n8. A fit with the compiled-network cache against the same fit packing at every simulation\n\n");
+printf ("\n9. A fit with the compiled-network cache against the same fit packing at every simulation\n\n");
 net = sb_pair ();
 t = (0:10:3000).';
 u = vn_signal ("F1.flow", "step", 600, 0.01, 0.013);
