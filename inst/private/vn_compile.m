@@ -28,28 +28,32 @@
 ## afresh), for comparisons.
 ## @end deftypefn
 
-function cn = vn_compile (net, part, idx)
+function cn = vn_compile (net, part = "", idx = [])
   persistent keys = {};
   persistent items = {};
-  if (nargin < 2)
-    part = "";
-  endif
-  if (! (isstruct (net) && isscalar (net) && isfield (net, "type")
-         && strcmp (net.type, "vesselnet.network")))
-    error ("Octave:invalid-input-arg",
-           "vesselnet: NET must be a network made by vn_network");
-  endif
+  ## A known key was a network packed before, so it needs no checking:
+  ## the common case costs the fingerprint and one comparison.
   key = __vn_hash__ (net);
   j = find (strcmp (keys, key), 1);
-  if (isempty (j))
+  if (! isempty (j))
+    cn = items{j};
+    if (isempty (part) || (part(1) == "r" && numel (part) == 7
+                           && ! isempty (cn.tmpl))
+        || (part(1) == "l" && ! isempty (cn.levels)))
+      return;
+    endif
+  else
+    if (! (isstruct (net) && isscalar (net) && isfield (net, "type")
+           && strcmp (net.type, "vesselnet.network")))
+      error ("Octave:invalid-input-arg",
+             "vesselnet: NET must be a network made by vn_network");
+    endif
     cn.key = key;
     cn.pk = vn_pack (net, "uncached");
     cn.layout = vn_quantity (net);
     cn.tmpl = [];
     cn.levels = [];
     j = 0;
-  else
-    cn = items{j};
   endif
   fresh = false;
   if (strcmp (part, "results") && isempty (cn.tmpl))
