@@ -35,6 +35,9 @@ function cn = vn_compile (net, part = "", idx = [])
   ## the common case costs the fingerprint and one comparison.
   key = __vn_hash__ (net);
   j = find (strcmp (keys, key), 1);
+  if (! isempty (j) && strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
+    j = [];                        # the cache is off: compile afresh
+  endif
   if (! isempty (j))
     cn = items{j};
     if (isempty (part) || (part(1) == "r" && numel (part) == 7
