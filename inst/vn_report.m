@@ -553,19 +553,30 @@ endfunction
 ## ---- validation --------------------------------------------------------
 
 function blocks = rep_validation (val, net)
-  names = cellstr (val.names);
-  blocks = {{"h", "validation on a test the fit has not seen"}};
-  c = cell (numel (names), 4);
-  for j = 1:numel (names)
-    n = nnz (isfinite (val.measured(:,j)) & isfinite (val.predicted(:,j)));
-    c(j,:) = {names{j}, sprintf("%d", n), qv(net, names{j}, val.rmse(j), true), ...
-              sprintf("%.3f", val.r2(j))};
+  blocks = {{"h", "validation on tests the fit has not seen"}};
+  c = cell (0, 6);
+  bad = {};
+  for k = 1:numel (val)
+    v = val(k);
+    names = cellstr (v.names);
+    tn = field_or (v, "name", sprintf ("test %d", k));
+    cens = false (size (v.measured));
+    if (isfield (v, "censored") && isequal (size (v.censored), size (v.measured)))
+      cens = logical (v.censored);
+    endif
+    for j = 1:numel (names)
+      n = nnz (isfinite (v.measured(:,j)) & isfinite (v.predicted(:,j)) & ! cens(:,j));
+      c(end+1,:) = {tn, names{j}, sprintf("%d", n), sprintf("%d", nnz (cens(:,j))), ...
+                    qv(net, names{j}, v.rmse(j), true), sprintf("%.3f", v.r2(j))};
+      if (v.r2(j) < 0.5)
+        bad{end+1} = names{j};
+      endif
+    endfor
   endfor
-  blocks = add_table (blocks, {"output", "readings", "rmse", "r2"}, c);
+  blocks = add_table (blocks, {"test", "output", "readings", "censored", "rmse", "r2"}, c);
   blocks{end+1} = {"p", "r2: Nash-Sutcliffe efficiency, 1 - SSE / SS about the mean (1 perfect, 0 no better than the mean)"};
-  bad = names(val.r2 < 0.5);
   if (! isempty (bad))
-    blocks{end+1} = {"p", ["r2 below 0.5, the model does not describe: " strjoin(bad(:).', ", ")]};
+    blocks{end+1} = {"p", ["r2 below 0.5, the model does not describe: " strjoin(unique (bad), ", ")]};
   endif
 endfunction
 
@@ -703,3 +714,22 @@ function files = pictures (x, kind, file, net)
     end_try_catch
   endfor
 endfunction
+
+%!demo
+%! ## Invented: a holding tank drained by an orifice; its operating point.
+%! net = vn_network ("holding tank (invented)", "display", {"flow", "m3/h"});
+%! net = vn_tank (net, "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_orifice (net, "O1", "T1", "", "coeff", 0.008);
+%! vn_report (vn_steady (net))
+
+## The content of every kind's report is checked in tests/octave/test_report.m.
+%!test
+%! pid = struct ("Kc", -1.5, "Ti", 600, "Td", 0, "form", "ideal",
+%!               "action", "direct", "method", "lambda", "type", "pi");
+%! s = vn_report (pid);
+%! assert (! isempty (regexp (s, "Kc +-1.5")));
+%! assert (! isempty (regexp (s, "Ti +10 min")));
+%! assert (! isempty (strfind (s, "direct action (vn_controller gets gain |Kc| = 1.5)")));
+%!error <Invalid call> vn_report ()
+%!error <cannot tell what result> vn_report (struct ("q", 1))

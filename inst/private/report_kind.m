@@ -9,6 +9,12 @@
 ## @end deftypefn
 
 function kind = report_kind (x, fn)
+  ## several tests give a validation per test
+  if (isstruct (x) && numel (x) > 1
+      && all (isfield (x, {"t", "names", "measured", "predicted", "rmse", "r2"})))
+    kind = "validation";
+    return;
+  endif
   if (! isstruct (x) || ! isscalar (x))
     error ("Octave:invalid-input-arg",
            "%s: X must be a result struct (operating point, linear model, step or frequency response, fit, validation, first-order model, tuning or ensemble), got a %s of size %s",

@@ -22,8 +22,7 @@ function [v, label] = report_qty (net, q, v, change)
       name = q{2};
     endif
   else
-    si = report_unit (net, q);
-    name = q;
+    [si, name] = report_unit (net, q);
   endif
   if (isempty (si) || strcmp (si, "conc"))
     label = si;

@@ -1,6 +1,6 @@
 ## -*- texinfo -*-
-## @deftypefn  {} {@var{si} =} report_unit (@var{net}, @var{q})
-## @deftypefnx {} {@var{si} =} report_unit (@var{net}, @var{q}, @var{unit})
+## @deftypefn  {} {[@var{si}, @var{like}] =} report_unit (@var{net}, @var{q})
+## @deftypefnx {} {[@var{si}, @var{like}] =} report_unit (@var{net}, @var{q}, @var{unit})
 ## The SI unit of measure (as the schema writes it: "m", "m3/s", "1") of
 ## quantity or parameter @var{q} ("T1.level", "O1.coeff", "LC1.gain",
 ## "T2.level:offset", "T2.level:scale") of network @var{net}; "" when
@@ -11,10 +11,14 @@
 ## is output unit per measured unit ("1/m", "(m3/s)/m").  A species
 ## concentration is "conc" (the unit the user chose).  @var{unit}, the
 ## unit struct of @var{q} when the caller has it, saves the lookup.
+## @var{like} is the quantity whose display unit @var{q} takes: @var{q}
+## itself, or for a controller's set point the quantity it measures, for
+## its limits the input it manipulates.
 ## @end deftypefn
 
-function si = report_unit (net, q, unit)
+function [si, like] = report_unit (net, q, unit)
   si = "";
+  like = q;
   if (! ischar (q) || ! isstruct (net) || ! isfield (net, "units"))
     return;
   endif
@@ -22,7 +26,7 @@ function si = report_unit (net, q, unit)
   if (! isempty (colon))
     switch (q(colon+1:end))
       case "offset"
-        si = report_unit (net, q(1:colon-1));
+        [si, like] = report_unit (net, q(1:colon-1));
       case "scale"
         si = "1";
     endswitch
@@ -39,10 +43,10 @@ function si = report_unit (net, q, unit)
     endif
     unit = net.units(k);
   endif
-  si = unit_of_var (net, unit, q(dot+1:end));
+  [si, like] = unit_of_var (net, unit, q(dot+1:end), q);
 endfunction
 
-function si = unit_of_var (net, u, var)
+function [si, like] = unit_of_var (net, u, var, like)
   si = "";
   sch = vn_schema ();
   if (! isfield (sch, u.kind))
@@ -74,8 +78,10 @@ function si = unit_of_var (net, u, var)
     switch (si)
       case "measured unit"
         si = meas;
+        like = u.aux.measure;
       case "output unit"
         si = out;
+        like = u.aux.manipulate;
       otherwise
         si = per (out, meas);
     endswitch
@@ -112,6 +118,11 @@ endfunction
 %!assert (report_unit (net, "FC1.setpoint"), "m")
 %!assert (report_unit (net, "T1.level:offset"), "m")
 %!assert (report_unit (net, "T1.level:scale"), "1")
+%!test
+%! [si, like] = report_unit (net, "LC1.setpoint");
+%! assert ({si, like}, {"m", "T1.level"});
+%! [si, like] = report_unit (net, "FC1.hi");
+%! assert ({si, like}, {"m3/s", "F1.flow"});
 %!assert (report_unit (net, "T9.level"), "")
 %!assert (report_unit (net, "LC1.action"), "")
 %!assert (report_unit (struct (), "T1.level"), "")

@@ -157,8 +157,16 @@
 %!               "rmse", sqrt (mean (r .^ 2)),
 %!               "r2", 1 - sum (r .^ 2) ./ sum ((ym - mean (ym)) .^ 2));
 %! s = vn_report (val, "net", netmm);
-%! assert (! isempty (regexp (s, "T1.level +11 +10 mm +0.99[0-9]")));
-%! assert (! isempty (regexp (s, "T2.level +11 +200 mm +-0.600")));
+%! assert (! isempty (regexp (s, "test 1 +T1.level +11 +0 +10 mm +0.99[0-9]")));
+%! assert (! isempty (regexp (s, "T2.level +11 +0 +200 mm +-0.600")));
+%! ## two tests, one reading censored in the second
+%! val(2) = val(1);
+%! val(2).name = "unseen";
+%! val(2).censored = false (11, 2);
+%! val(2).censored(end, 1) = true;
+%! val(1).censored = false (11, 2);
+%! s = vn_report (val, "net", netmm);
+%! assert (! isempty (regexp (s, "unseen +T1.level +10 +1 +10 mm")));
 %! assert (! isempty (strfind (s, "r2 below 0.5, the model does not describe: T2.level")));
 %! assert (! isempty (strfind (s, "Nash-Sutcliffe")));
 
