@@ -207,3 +207,6 @@ steady_bench (ran);
 ## 3. Fitting three coefficients to two step tests (bench/fit_bench.m)
 printf ("\n3. Fit: vn_fit against fminsearch over ode15s (same model, same data)\n\n");
 run (fullfile (fileparts (mfilename ("fullpath")), "fit_bench.m"));
+
+## 4. Reading plant records (bench/readlog_bench.m)
+run (fullfile (fileparts (mfilename ("fullpath")), "readlog_bench.m"));
