@@ -142,7 +142,16 @@ function h = vn_plot (s, varargin)
         ax = plot_ensemble (hf, s, opt);
         deftitle = "";
       case "fit"
-        ax = plot_fit (hf, s, opt);
+        if (isempty (opt.net) && isfield (s, "net") && isstruct (s.net)
+            && isfield (s.net, "units"))
+          opt.net = s.net;
+        endif
+        if (isfield (s.fit, "censored")
+            && any (cellfun (@(c) any (c(:)), {s.fit.censored})))
+          ax = plot_validate (hf, s.fit, opt);   # censored readings ringed
+        else
+          ax = plot_fit (hf, s, opt);
+        endif
         deftitle = "";
       case "validate"
         ax = plot_validate (hf, s, opt);
