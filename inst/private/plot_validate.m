@@ -16,7 +16,10 @@ function ax = plot_validate (h, val, opt)
     v = val(k);
     c = v.censored;
     ## one line: gnuplot cannot stack a two-line title over these axes
-    note = v.name;
+    note = sprintf ("experiment %d", k);
+    if (isfield (v, "name") && ischar (v.name) && ! isempty (v.name))
+      note = v.name;
+    endif
     if (isfield (v, "r2"))
       fig = arrayfun (@(j) sprintf ("%s %.3f", v.names{j}, v.r2(j)),
                       1:numel (v.names), "uniformoutput", false);
