@@ -1,7 +1,15 @@
 ## vesselnet developer entry points.
 ##   make            build build/libvncore.a and build/oct/*.oct
 ##   make check      install missing Debian packages (as root), build, run
-##                   the C and Octave tests; last line "N passed, N failed"
+##                   the C tests (also under the sanitizers) and the Octave
+##                   tests; last line "N passed, N failed"
+##   make sanitize   core and C tests built with gcc -fsanitize=address,
+##                   undefined into build/sanitize and run; any report fails
+##   make fuzz       libFuzzer harness tests/fuzz (clang-14), a short run
+##   make stress     fuzz for STRESS_SECONDS, then the property suite with
+##                   VN_PROP_CASES=3000
+##   make memcheck   valgrind over a few Octave calls; reports inside
+##                   vesselnet fail
 ##   make demo       run demos/run_demo.m
 ##   make bench      run bench/run_bench.sh or bench/run_bench.m
 ##   make dist       write vesselnet-VERSION.tar.gz for "pkg install"
@@ -47,7 +55,8 @@ OCTAVE_SETUP = more off; warning ('off', 'Octave:gnuplot-graphics'); \
                set (0, 'defaultfigurevisible', 'off');
 
 .DELETE_ON_ERROR:
-.PHONY: all deps check ctests demo bench dist distcheck install clean FORCE
+.PHONY: all deps check ctests demo bench dist distcheck install clean FORCE \
+        sanitize sanitize-build fuzz fuzz-build stress memcheck
 
 all: $(LIB)
 	@$(SUBMAKE) oct
@@ -73,6 +82,41 @@ $(CTEST_DIR)/%: tests/c/%.c $(wildcard tests/c/*.h) $(wildcard src/core/*.h) \
 	$(VN_CC) $(CORE_CFLAGS) -Isrc/core -Itests/c -I$(SUITESPARSE_INC) \
 	  $< $(LIB) $(VN_LIBS) -o $@ 2>&1 | tee $@.build.log
 
+## ---- sanitizers: the core and every C test again, with AddressSanitizer
+## (leaks included) and UndefinedBehaviorSanitizer, in build/sanitize.
+## gcc's runtimes come with build-essential; nothing else is needed.  A
+## report stops the program (-fno-sanitize-recover) and fails its file.
+SAN_DIR    := $(BUILD)/sanitize
+SAN_LIB    := $(SAN_DIR)/libvncore.a
+SAN_FLAGS  := -fsanitize=address,undefined,float-cast-overflow \
+              -fno-sanitize-recover=all -fno-omit-frame-pointer -g
+SAN_CFLAGS := -std=c99 -O1 -fPIC -Wall -Wextra -Werror $(SAN_FLAGS)
+SAN_BIN    := $(patsubst tests/c/%.c,$(SAN_DIR)/tests/c/%,$(CTEST_SRC))
+SAN_ENV    := ASAN_OPTIONS=detect_leaks=1:halt_on_error=1:exitcode=23 \
+              UBSAN_OPTIONS=print_stacktrace=1:halt_on_error=1
+
+$(SAN_LIB): FORCE
+	@$(MAKE) --no-print-directory -C src OUT=$(SAN_DIR) VN_CC=$(VN_CC) \
+	  CORE_CFLAGS="$(SAN_CFLAGS)" lib
+
+$(SAN_DIR)/tests/c:
+	mkdir -p $@
+
+$(SAN_DIR)/tests/c/%: tests/c/%.c $(wildcard tests/c/*.h) \
+                      $(wildcard src/core/*.h) $(SAN_LIB) | $(SAN_DIR)/tests/c
+	@rm -f $@
+	$(VN_CC) $(SAN_CFLAGS) -Isrc/core -Itests/c -I$(SUITESPARSE_INC) \
+	  $< $(SAN_LIB) $(VN_LIBS) -o $@ 2>&1 | tee $@.build.log
+
+sanitize-build: $(SAN_BIN)
+
+sanitize:
+	@$(MAKE) --no-print-directory -k sanitize-build || true
+	@rm -rf $(SAN_DIR)/results && mkdir -p $(SAN_DIR)/results
+	@$(SAN_ENV) bash tests/run_c_tests.sh $(SAN_DIR)/tests/c \
+	  $(SAN_DIR)/results sanitize
+	@bash tools/sum_results.sh $(SAN_DIR)/results
+
 ## A failed build is recorded as a failure and the tests still run, so one
 ## broken file does not hide the state of everything else.  Oct-files are
 ## removed then, so no test runs against a stale build.
@@ -86,6 +130,12 @@ check: deps
 	@$(MAKE) --no-print-directory -k ctests || true
 	@echo "== C tests"
 	@bash tests/run_c_tests.sh $(CTEST_DIR) $(RESULTS)
+	@echo "== C tests under the sanitizers (gcc -fsanitize=address,undefined)"
+	@$(MAKE) --no-print-directory -k sanitize-build \
+	  > $(RESULTS)/sanitize-build.log 2>&1 \
+	  || echo "0 1 0 sanitize-build $(RESULTS)/sanitize-build.log" \
+	       "make sanitize-build failed" > $(RESULTS)/sanitize-build.res
+	@$(SAN_ENV) bash tests/run_c_tests.sh $(SAN_DIR)/tests/c $(RESULTS) sanitize
 	@echo "== Octave tests"
 	@VN_OCTDIR=$(OCTDIR) bash tests/run_octave_tests.sh $(RESULTS)
 	@bash tools/sum_results.sh $(RESULTS)
