@@ -458,9 +458,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
                             "has index %d outside the network", j + 1, yi);
               goto done;
             }
-          for (int i = 0; i < net->nu && u < 0; i++)
-            if (yi >= net->u[i].yoff && yi < net->u[i].yoff + net->u[i].nout)
-              u = i;
+          u = vn_output_unit (net, yi);
           S.rec.unit[j] = u;
           S.rec.nodes_only &= net->u[u].k->role == VN_ROLE_NODE;
         }
