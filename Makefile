@@ -56,7 +56,7 @@ OCTAVE_SETUP = more off; warning ('off', 'Octave:gnuplot-graphics'); \
 
 .DELETE_ON_ERROR:
 .PHONY: all deps check ctests demo bench dist distcheck install clean FORCE \
-        sanitize sanitize-build fuzz fuzz-build stress memcheck
+        sanitize sanitize-build fuzz fuzz-build fuzz-seeds stress memcheck
 
 all: $(LIB)
 	@$(SUBMAKE) oct
@@ -76,7 +76,7 @@ $(CTEST_DIR):
 	mkdir -p $@
 
 ## The old binary goes first: a test that no longer compiles must not run.
-$(CTEST_DIR)/%: tests/c/%.c $(wildcard tests/c/*.h) $(wildcard src/core/*.h) \
+$(CTEST_DIR)/%: tests/c/%.c $(wildcard tests/c/*.h tests/fuzz/*.h) $(wildcard src/core/*.h) \
                 $(LIB) | $(CTEST_DIR)
 	@rm -f $@
 	$(VN_CC) $(CORE_CFLAGS) -Isrc/core -Itests/c -I$(SUITESPARSE_INC) \
@@ -102,7 +102,7 @@ $(SAN_LIB): FORCE
 $(SAN_DIR)/tests/c:
 	mkdir -p $@
 
-$(SAN_DIR)/tests/c/%: tests/c/%.c $(wildcard tests/c/*.h) \
+$(SAN_DIR)/tests/c/%: tests/c/%.c $(wildcard tests/c/*.h tests/fuzz/*.h) \
                       $(wildcard src/core/*.h) $(SAN_LIB) | $(SAN_DIR)/tests/c
 	@rm -f $@
 	$(VN_CC) $(SAN_CFLAGS) -Isrc/core -Itests/c -I$(SUITESPARSE_INC) \
@@ -116,6 +116,64 @@ sanitize:
 	@$(SAN_ENV) bash tests/run_c_tests.sh $(SAN_DIR)/tests/c \
 	  $(SAN_DIR)/results sanitize
 	@bash tools/sum_results.sh $(SAN_DIR)/results
+
+## ---- fuzzing: tests/fuzz/fuzz_core.c under libFuzzer (clang-14), with the
+## core compiled in, AddressSanitizer and UBSan on.  Optional: without
+## clang or its fuzzer runtime the targets say so and do nothing; make
+## check never needs clang (tests/c/test_fuzz_replay.c replays the seeds
+## and every crash input with gcc).
+FUZZ_CC        ?= clang-14
+FUZZ_DIR       := $(BUILD)/fuzz
+FUZZ_BIN       := $(FUZZ_DIR)/fuzz_core
+FUZZ_SECONDS   ?= 30
+STRESS_SECONDS ?= 120
+FUZZ_CFLAGS := -std=c99 -g -O1 -Wall -Wextra \
+               -fsanitize=fuzzer,address,undefined,float-cast-overflow \
+               -fno-sanitize-recover=all -Isrc/core -I$(SUITESPARSE_INC)
+FUZZ_SRC := tests/fuzz/fuzz_core.c $(wildcard tests/fuzz/*.h) \
+            $(wildcard src/core/*.c src/core/*.h)
+FUZZ_PROBE = printf 'int LLVMFuzzerTestOneInput (const char *d, long n)\n{ (void) d; (void) n; return 0; }\n' \
+             | $(FUZZ_CC) -fsanitize=fuzzer -x c - -o /dev/null >/dev/null 2>&1
+
+$(FUZZ_BIN): $(FUZZ_SRC)
+	@mkdir -p $(FUZZ_DIR)
+	$(FUZZ_CC) $(FUZZ_CFLAGS) tests/fuzz/fuzz_core.c src/core/*.c \
+	  $(VN_LIBS) -lpthread -o $@
+
+fuzz-build:
+	@if command -v $(FUZZ_CC) >/dev/null && $(FUZZ_PROBE); then \
+	  $(MAKE) --no-print-directory $(FUZZ_BIN); \
+	else \
+	  echo "fuzz: skipped: $(FUZZ_CC) with libFuzzer (-fsanitize=fuzzer) is" \
+	       "not installed (Debian: clang-14 libclang-rt-14-dev)"; \
+	fi
+
+## Writes the committed seed corpus from tests/fuzz/seeds.c (run it after
+## a schema change; the seeds must still build).
+fuzz-seeds: $(LIB)
+	@mkdir -p $(FUZZ_DIR)
+	$(VN_CC) $(CORE_CFLAGS) -Isrc/core -I$(SUITESPARSE_INC) tests/fuzz/seeds.c \
+	  $(LIB) $(VN_LIBS) -lpthread -o $(FUZZ_DIR)/seeds
+	$(FUZZ_DIR)/seeds tests/fuzz/corpus tests/fuzz/regress
+
+fuzz: fuzz-build
+	@if [ -x $(FUZZ_BIN) ]; then \
+	  bash tests/fuzz/run_fuzz.sh $(FUZZ_BIN) $(FUZZ_DIR) $(FUZZ_SECONDS); fi
+
+## The fuzzer for STRESS_SECONDS, then the random-network property suite
+## with 3000 cases when it exists.
+stress: fuzz-build all
+	@if [ -x $(FUZZ_BIN) ]; then \
+	  bash tests/fuzz/run_fuzz.sh $(FUZZ_BIN) $(FUZZ_DIR) $(STRESS_SECONDS); fi
+	@if [ -f tests/octave/test_properties.m ]; then \
+	  echo "stress: tests/octave/test_properties.m with VN_PROP_CASES=3000"; \
+	  rm -rf $(BUILD)/stress-results; \
+	  VN_PROP_CASES=3000 VN_OCTDIR=$(OCTDIR) bash tests/run_octave_tests.sh \
+	    $(BUILD)/stress-results tests/octave/test_properties.m; \
+	  bash tools/sum_results.sh $(BUILD)/stress-results; \
+	else \
+	  echo "stress: tests/octave/test_properties.m not found, property suite skipped"; \
+	fi
 
 ## A failed build is recorded as a failure and the tests still run, so one
 ## broken file does not hide the state of everything else.  Oct-files are
