@@ -175,6 +175,11 @@ stress: fuzz-build all
 	  echo "stress: tests/octave/test_properties.m not found, property suite skipped"; \
 	fi
 
+## ---- valgrind over a few Octave calls; only reports with a frame inside
+## vesselnet count (tests/memcheck/run_memcheck.sh).  Takes minutes.
+memcheck: deps all
+	@bash tests/memcheck/run_memcheck.sh $(OCTDIR) $(BUILD)/memcheck
+
 ## A failed build is recorded as a failure and the tests still run, so one
 ## broken file does not hide the state of everything else.  Oct-files are
 ## removed then, so no test runs against a stale build.
