@@ -278,16 +278,24 @@ vn_gw_build (const octave_value &pk, vn_gw_spec &G, vn_gw_net &H,
                                  : "vesselnet:core", "%s: %s", fn, msg);
 }
 
+// Ctrl-C stopped the core: the pending interrupt is taken over by an
+// error the caller can catch (id vesselnet:interrupted), so the session
+// goes on with its workspace as it was, and a script sees why it stopped.
+static inline void
+vn_gw_interrupted (const char *fn, const char *why)
+{
+  octave_signal_caught = 0;
+  octave_interrupt_state = 0;
+  error_with_id ("vesselnet:interrupted", "%s: %s (Ctrl-C)", fn, why);
+}
+
 static inline void
 vn_gw_check (vn_net *net, int st, const char *fn)
 {
   if (st == VN_OK)
     return;
   if (st == VN_EINTR)
-    {
-      octave_quit ();
-      error_with_id ("vesselnet:interrupted", "%s: %s", fn, vn_errmsg (net));
-    }
+    vn_gw_interrupted (fn, vn_errmsg (net));
   const char *id = st == VN_EARG ? "Octave:invalid-input-arg"
                    : st == VN_ENOSTEADY ? "vesselnet:no-steady-state"
                    : st == VN_ESOLVER ? "vesselnet:solver-failure"
