@@ -4,7 +4,8 @@
 ## fit_classify) with parameters @var{p}; with two outputs also their
 ## sensitivities @var{S} (times x outputs x parameters, d output / d p)
 ## from the core's forward sensitivities.  The initial-state
-## sensitivities follow the start: at a steady state dx0/dp = -A \ B_p;
+## sensitivities follow the start: at a steady state dx0/dp = -A \ B_p on
+## the states p reaches (lin_reach, lin_steady_part);
 ## from declared levels by central differences of the (algebraic)
 ## initial state.
 ## @end deftypefn
@@ -29,16 +30,28 @@ function [Y, S] = fit_model (net, e, pq, p, so)
                         zeros (1, 0), so_ss);
     if (want)
       [A, B] = __vn_linearize__ (pk, x0, pin, e.yidx, false);
-      sx0 = - (full (A) \ full (B));
+      ## only the states each parameter reaches move (an idle catch tank
+      ## does not); a singular A is split, never solved as it stands
+      reach = lin_reach (A, B);
+      sx0 = zeros (size (B));
+      for i = 1:np
+        s = find (reach(:,i));
+        sx0(s,i) = lin_steady_part (A(s,s), B(s,i));
+      endfor
     endif
   else
     [~, ~, ~, ~, ~, x0] = __vn_linearize__ (pk, [], pin, e.yidx, false);
     if (want)
       sx0 = zeros (numel (x0), np);
       for i = 1:np
-        h = 1e-6 * abs (p(i));
+        ## a starting level may be zero: a forward difference there
+        h = 1e-6 * max (abs (p(i)), 1e-3);
+        lo = p(i) - h;
+        if (lo < 0 && p(i) >= 0)
+          lo = p(i);
+        endif
         sx0(:, i) = (initial (pk, pq{i}, p(i) + h, pin, e.yidx)
-                     - initial (pk, pq{i}, p(i) - h, pin, e.yidx)) / (2 * h);
+                     - initial (pk, pq{i}, lo, pin, e.yidx)) / (p(i) + h - lo);
       endfor
     endif
   endif
