@@ -6,11 +6,17 @@
  *   - argument errors of vn_simulate_sens (recorded outputs, sensitivity
  *     parameters and outputs) and the switch-count limit
  *   - strapping tables whose offset or count lies outside vn_spec.ntab
- *   - a signal whose data offset is negative */
+ *   - a signal whose data offset is negative
+ *   - a table network written to a cluster job file and read back: the
+ *     spec read back carries the table length, so it builds */
+#define _POSIX_C_SOURCE 200809L
 #include <math.h>
 #include <stdio.h>
+#include <stdlib.h>
 #include <string.h>
+#include <unistd.h>
 #include "vn.h"
+#include "vn_jobfile.h"
 #include "vn_test.h"
 
 /* feed -> T1 -> orifice: fills towards h = (F/c)^2 = 1.44 m */
@@ -274,6 +280,62 @@ static void signal_offset (void)
   vn_net_free (net);
 }
 
+static void job_file_table (void)
+{
+  vt_net b;
+  table_tank (&b);
+  vn_net *net = NULL;
+  if (vt_build (&b, &net) != VN_OK)
+    {
+      VT_CHECK (0, "table network builds (%s)", b.msg);
+      return;
+    }
+  vn_net_free (net);
+  double tout[2] = {0, 10};
+  vn_ens_job job = {0};
+  job.spec = &b.spec;
+  job.nt = 2;
+  job.tout = tout;
+  job.nrun = 1;
+  char path[] = "/tmp/vn_test_robust_XXXXXX", err[512] = "";
+  int fd = mkstemp (path);
+  if (fd < 0)
+    {
+      VT_CHECK (0, "temporary job file");
+      return;
+    }
+  close (fd);
+  int st = vn_job_write (path, &job, err, sizeof err);
+  VT_CHECK (st == VN_OK, "job with a table tank written (%s)", err);
+  unsigned char *buf = NULL;
+  size_t len = 0;
+  vn_job_store js;
+  memset (&js, 0, sizeof js);
+  if (!st)
+    st = vn_file_read (path, &buf, &len, err, sizeof err);
+  if (!st)
+    st = vn_job_parse (buf, len, &js, err, sizeof err);
+  VT_CHECK (st == VN_OK, "job read back (%s)", err);
+  if (!st)
+    {
+      VT_CHECK (js.spec.ntab == 3, "table length read back: %ld pairs (want "
+                "3)", js.spec.ntab);
+      net = NULL;
+      char msg[1024] = "";
+      st = vn_net_new (&js.spec, &net, msg, sizeof msg);
+      VT_CHECK (st == VN_OK, "the job's network builds (%s)", msg);
+      double x0[1] = {NAN};
+      if (!st)
+        vn_initial_state (net, x0);
+      VT_NEAR (x0[0], 1.0, 1e-12, "volume at level 0.5 after the round "
+               "trip (m3)");
+      vn_net_free (net);
+      vn_job_free (&js);
+    }
+  free (buf);
+  remove (path);
+}
+
 int main (void)
 {
   integrator_failure ();
@@ -281,5 +343,6 @@ int main (void)
   too_many_switches ();
   table_bounds ();
   signal_offset ();
+  job_file_table ();
   return vt_done ();
 }
