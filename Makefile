@@ -145,6 +145,7 @@ FUZZ_SRC := tests/fuzz/fuzz_core.c $(wildcard tests/fuzz/*.h) \
             $(wildcard src/core/*.c src/core/*.h)
 FUZZ_PROBE = printf 'int LLVMFuzzerTestOneInput (const char *d, long n)\n{ (void) d; (void) n; return 0; }\n' \
              | $(FUZZ_CC) -fsanitize=fuzzer -x c - -o /dev/null >/dev/null 2>&1
+FUZZ_OK = command -v $(FUZZ_CC) >/dev/null && $(FUZZ_PROBE)
 
 $(FUZZ_BIN): $(FUZZ_SRC)
 	@mkdir -p $(FUZZ_DIR)
@@ -152,7 +153,7 @@ $(FUZZ_BIN): $(FUZZ_SRC)
 	  $(VN_LIBS) -lpthread -o $@
 
 fuzz-build:
-	@if command -v $(FUZZ_CC) >/dev/null && $(FUZZ_PROBE); then \
+	@if $(FUZZ_OK); then \
 	  $(MAKE) --no-print-directory $(FUZZ_BIN); \
 	else \
 	  echo "fuzz: skipped: $(FUZZ_CC) with libFuzzer (-fsanitize=fuzzer) is" \
@@ -168,13 +169,13 @@ fuzz-seeds: $(LIB)
 	$(FUZZ_DIR)/seeds tests/fuzz/corpus tests/fuzz/regress
 
 fuzz: fuzz-build
-	@if [ -x $(FUZZ_BIN) ]; then \
+	@if $(FUZZ_OK); then \
 	  bash tests/fuzz/run_fuzz.sh $(FUZZ_BIN) $(FUZZ_DIR) $(FUZZ_SECONDS); fi
 
 ## The fuzzer for STRESS_SECONDS, then the random-network property suite
 ## with 3000 cases when it exists.
 stress: fuzz-build all
-	@if [ -x $(FUZZ_BIN) ]; then \
+	@if $(FUZZ_OK); then \
 	  bash tests/fuzz/run_fuzz.sh $(FUZZ_BIN) $(FUZZ_DIR) $(STRESS_SECONDS); fi
 	@if [ -f tests/octave/test_properties.m ]; then \
 	  echo "stress: tests/octave/test_properties.m with VN_PROP_CASES=3000"; \
