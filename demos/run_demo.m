@@ -129,10 +129,27 @@ if (demo_have ("vn_plot"))
       vn_plot (sr, "file", f, "title", "Step on TV301.opening");
       files{end+1} = f;
     endif
+    if (! isempty (op) && exist ("lin", "var"))
+      f = fullfile (out, "waterworks_frequency.png");
+      vn_plot (lin, "file", f);
+      files{end+1} = f;
+    endif
   catch err
     printf ("vn_plot failed: %s\n", err.message);
   end_try_catch
-  printf ("\nPictures written:\n");
+  ## ---- reports ---------------------------------------------------------
+  if (demo_have ("vn_report") && ! isempty (sr))
+    try
+      printf ("\nvn_report (sr):\n\n");
+      vn_report (sr);
+      f = fullfile (out, "waterworks_step.md");
+      vn_report (sr, "file", f, "title", "Water works (invented): step on TV301.opening");
+      files(end+1:end+2) = {f, fullfile(out, "waterworks_step_1.png")};
+    catch err
+      printf ("vn_report failed: %s\n", err.message);
+    end_try_catch
+  endif
+  printf ("\nPictures and reports written:\n");
   printf ("  %s\n", files{:});
 endif
 printf ("\nAll figures come from an invented model: validate a model against plant data\nand have any tuning reviewed before it is used on a live works.\n");
@@ -149,7 +166,26 @@ end_try_catch
 
 ## ---- fitting step tests and tuning a level loop (fit_and_tune.m) -------
 try
-  fit_and_tune (demo_outdir (fullfile (here, "output")));
+  outdir = demo_outdir (fullfile (here, "output"));
+  ft = fit_and_tune (outdir);
+  if (demo_have ("vn_report"))
+    printf ("\nvn_report (est):\n\n");
+    vn_report (ft.est);
+    printf ("\nvn_report (pid):\n\n");
+    vn_report (ft.pid);
+    files = {fullfile(outdir, "fit_and_tune_report.md"), ...
+             fullfile(outdir, "fit_and_tune_report_1.png")};
+    vn_report (ft.est, "file", files{1}, "title", "Buffer tanks (invented data): fit");
+    ## the lambda loop on the first-order model of the valve test
+    m = ft.m;
+    g = struct ("A", -1 / m.tau, "B", m.gain / m.tau, "C", 1, "D", 0,
+                "inputs", {{"LV1.opening"}}, "outputs", {{"WB.level"}});
+    fr = vn_frequency (g, "controller", ft.pid);
+    files{end+1} = fullfile (outdir, "fit_and_tune_margins.png");
+    vn_plot (fr, "file", files{end});
+    printf ("\nPictures and reports written:\n");
+    printf ("  %s\n", files{:});
+  endif
 catch err
   printf ("fit_and_tune failed: %s\n", err.message);
 end_try_catch

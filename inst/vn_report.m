@@ -451,13 +451,21 @@ function blocks = rep_frequency (fr, net)
                                   report_time(net, pid.Td), pid.form, lp.action)};
     c = {"gain margin", sprintf("%s (%s dB)", report_num(lp.gain_margin), ...
                                report_num(lp.gain_margin_db)), ...
-         ["at the phase crossover " report_num(lp.phase_crossover) " rad/s"];
+         where("phase", lp.phase_crossover);
          "phase margin", [report_num(lp.phase_margin) " deg"], ...
-         ["at the gain crossover " report_num(lp.gain_crossover) " rad/s"]};
+         where("gain", lp.gain_crossover)};
     blocks{end+1} = {"t", {"margin", "value", "where"}, c};
     if (lp.phase_margin < 30 || lp.gain_margin < 2)
       blocks{end+1} = {"p", "margins below common practice (gain margin 2, phase margin 30 deg)"};
     endif
+  endif
+endfunction
+
+function s = where (what, w)
+  if (isfinite (w))
+    s = sprintf ("at the %s crossover, %s rad/s", what, report_num (w));
+  else
+    s = sprintf ("no %s crossover on the grid", what);
   endif
 endfunction
 

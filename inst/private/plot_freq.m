@@ -139,7 +139,19 @@ function ax = draw_grid (h, w, fr, ins, outs, opt)
   annotation_note (h, "magnitude (output unit per input unit) over phase (deg); the same scales in every panel");
 endfunction
 
-## One line of text at the foot of the figure.
+## At most about six decade ticks on a log magnitude axes.
+function decade_ticks (a, mag)
+  good = mag(isfinite (mag) & mag > 0);
+  if (isempty (good))
+    return;
+  endif
+  lo = floor (log10 (min ([good; 1])));
+  hi = ceil (log10 (max ([good; 1])));
+  step = max (1, ceil ((hi - lo) / 6));
+  set (a, "ylim", 10 .^ [lo hi], "ytick", 10 .^ (lo:step:hi));
+endfunction
+
+## One line of text at the top of the figure.
 function annotation_note (h, s)
   a = axes ("parent", h, "position", [0 0.965 1 0.03], "visible", "off",
             "xlim", [0 1], "ylim", [0 1], "tag", "note");
@@ -195,6 +207,7 @@ function ax = draw_loop (h, w, lp, opt)
   else
     table{end+1} = "GM Inf";
   endif
+  decade_ticks (ax(1), mag);
   ylabel (ax(1), "|L| (ratio)");
   ylabel (ax(2), "phase of L (deg)");
   xlabel (ax(2), "frequency (rad/s)");

@@ -18,7 +18,7 @@ function ax = plot_stack (h, weights, column, ncolumns)
     left = 0.1;
     legroom = 0.15;
   endif
-  bottom = 0.09;
+  bottom = 0.1;
   top = 0.075;
   n = numel (weights);
   gap = min (0.05, 0.3 / n);
