@@ -17,7 +17,8 @@
 ## "," ";" or a tab, detected from the header (tab before ";" before
 ## ",").  With ";" or tabs a decimal comma is accepted ("36,2").  Double
 ## quotes around fields are dropped.  A delimiter at the end of every line
-## is allowed.
+## is allowed.  The text is UTF-8 (a byte order mark is skipped) or
+## Latin-1; UTF-16 ("Unicode text" of spreadsheets) is refused.
 ## @item Time stamps
 ## ISO 8601 with a space or "T" between date and time and optional
 ## fractional seconds ("2026-03-04 06:00:00", "2026-03-04T06:00:00.250",
@@ -116,6 +117,11 @@ function log = read_all (fid, where)
     if (first)
       if (numel (c) >= 3 && all (double (c(1:3)) == [239 187 191]))
         c(1:3) = [];  # UTF-8 byte order mark
+      elseif (numel (c) >= 2 && (all (double (c(1:2)) == [255 254])
+                                 || all (double (c(1:2)) == [254 255])))
+        error ("Octave:invalid-input-arg",
+               ["%s: the file is UTF-16 text (\"Unicode text\"); save it ", ...
+                "as UTF-8 or plain text (CSV) and read that"], where);
       endif
     endif
     if (atend)

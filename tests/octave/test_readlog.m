@@ -157,6 +157,7 @@
 %!error <vn_readlog: ".*empty.csv": the file holds no header line followed by data> vn_readlog (put (dir, "empty.csv", "\n\ntime,x\n"))
 %!error <vn_readlog: ".*noname.csv" line 1: column 2 of the header has no tag name> vn_readlog (put (dir, "noname.csv", "time,,x\n0,1,2\n"))
 %!error <vn_readlog: FILE must be a file name, got a double> vn_readlog (3)
+%!error <vn_readlog: ".*u16.txt": the file is UTF-16 text> vn_readlog (put (dir, "u16.txt", [char([255 254]), "t", char(0), ",", char(0)]))
 %!error <vn_readlog: ".*mid.csv" line 3 has 4 fields, the header 3: "10,1,2,3"> vn_readlog (put (dir, "mid.csv", "t,x,y\n0,1,2\n10,1,2,3\n20,1,2\n30,1,2\n"))
 %!error <vn_readlog: ".*mid2.csv" line 4 has 2 fields, the header 3: "20,1"> vn_readlog (put (dir, "mid2.csv", "t,x,y\n0,1,2\n10,Bad,2\n20,1\n30,1,2\n"))
 
