@@ -110,10 +110,17 @@ function log = read_all (fid, where)
   pieces = {};
   first = true;
   last = [];          # time and line of the last row read
+  cr = false;         # lines end in a carriage return alone
   while (true)
     [b, n] = fread (fid, blk, "*char");
     atend = n < blk;
     c = [rest, b.'];
+    if (first && isempty (strfind (c, "\n")) && ! isempty (strfind (c, "\r")))
+      cr = true;
+    endif
+    if (cr)
+      c(c == "\r") = "\n";
+    endif
     if (first)
       if (numel (c) >= 3 && all (double (c(1:3)) == [239 187 191]))
         c(1:3) = [];  # UTF-8 byte order mark

@@ -73,6 +73,11 @@
 %! assert (log.data, [1.5 1.2; 2.5 1.3; 3.5 NaN], 1e-15);
 %! assert (log.bad, [0 1]);
 
+%!test
+%! ## lines ended by a carriage return alone
+%! log = vn_readlog (put (dir, "cr.csv", "t,x [mm]\r0,1\r5,2\r"));
+%! assert ([log.t, log.x], [0 1e-3; 5 2e-3]);
+
 ## ---- calendar -------------------------------------------------------
 %!test
 %! ## across midnight, the end of February (2026: 28 days) and a year end
