@@ -384,8 +384,9 @@ function [p, last] = parse_block (c, hdr, line0, where, last)
 endfunction
 
 ## Go on from where sscanf stopped, one cleaned line at a time, at most
-## 32 times per block; then, or when lines and rows do not match (a line
-## of blanks that sscanf skipped), read the rest by slow_block.
+## 150 times per block (each costs a copy of the rest of the block); then,
+## or when lines and rows do not match (a line of blanks that sscanf
+## skipped), read the rest by slow_block.
 function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
   nl = find (c == "\n");
   st = [1, nl(1:end-1) + 1];
@@ -395,7 +396,7 @@ function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
   rows = zeros (m, np);
   keep = true (1, m);
   r = 1;
-  for fails = 0:32
+  for fails = 0:150
     nfull = min (floor (cnt / np), m - r + 1);
     rows(r:r+nfull-1,:) = reshape (v(1:nfull*np), np, nfull).';
     r += nfull;
@@ -423,7 +424,7 @@ function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
     r += 1;
     if (r > m)
       break;
-    elseif (fails >= 32)
+    elseif (fails >= 150)
       ## the rest of the block, read carefully
       done = find (keep(1:r-1));
       [rest, lrest] = slow_block (c(st(ne(r)):end), hdr, line0 + ne(r) - 1,
