@@ -91,7 +91,9 @@ function ax = plot_fit (h, est, opt)
       rm = max (abs (r(isfinite (r))));
       if (! isempty (rm) && rm > 0)
         rm = 1.1 * rm;
-        set (ar, "ylim", [-rm rm], "ytick", [-1 0 1] * str2double (sprintf ("%.1g", rm / 1.1)));
+        tk = 10 ^ floor (log10 (rm / 1.1));
+        tk *= floor (rm / 1.1 / tk);
+        set (ar, "ylim", [-rm rm], "ytick", [-tk 0 tk]);
       endif
       ## the same entries in every column: the legend beside the last
       if (k == ne || any (c))

@@ -178,6 +178,7 @@ function ax = draw_loop (h, w, lp, opt)
   endif
   table = {};
   labels = {"L = C G"};
+  base = -180;
   if (isfinite (lp.gain_crossover))
     wc = lp.gain_crossover;
     pc = interp1 (log (w), ph, log (wc));
@@ -211,7 +212,11 @@ function ax = draw_loop (h, w, lp, opt)
   ylabel (ax(1), "|L| (ratio)");
   ylabel (ax(2), "phase of L (deg)");
   xlabel (ax(2), "frequency (rad/s)");
-  limits (ax, w, ph);
+  if (isfinite (lp.gain_crossover))
+    limits (ax, w, [ph; base]);
+  else
+    limits (ax, w, ph);
+  endif
   set (ax(1), "xticklabel", {});
   title (ax(1), sprintf ("loop %s to %s, %s action", lp.input, lp.output, lp.action),
          "interpreter", "none");
