@@ -64,8 +64,9 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
   if (vn_given (net, u, SUCTION) && s->istank)
     {
       /* a wider band lowers the gate: g(l/b), dg/db = -g'(l) l / b */
-      double dgs, sl = s->level - out_, bd = band (net, u);
-      vn_gate (sl, bd, &dgs);
+      double dgs, bd = band (net, u);
+      double sl = vn_tank_above (net, s, out_, vn_pcol (u, OUTLET), NULL);
+      vn_gate_liquid (sl, bd, out_ <= 0, &dgs);
       vn_lf_p (pg, vn_pcol (u, SUCTION), -dgs * sl / bd);
     }
   double dh = vn_link_dh (u, s, d, out_, in_, vn_pcol (u, OUTLET),

@@ -79,10 +79,12 @@ static int movable (const vn_net *net, int kind, int slot, int pidx,
   /* The core gives level sensitivities to the plan of a prism only; the
    * geometry of round vessels is checked on its own in
    * round_geometry (), so these columns do not hide the other ones. */
+  /* round vessels: diameter, length, height enter the level map and the
+   * liquid gate exactly, so they are checked like any other input */
   if (round && (strcmp (pi->name, "diameter") == 0
                 || strcmp (pi->name, "length") == 0
                 || strcmp (pi->name, "height") == 0))
-    return 0;
+    return 1;
   for (int i = 0; fixed[i]; i++)
     if (strcmp (pi->name, fixed[i]) == 0)
       return -1;   /* only when given */
