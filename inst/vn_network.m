@@ -31,6 +31,24 @@
 ## @item @qcode{"smooth"}
 ## Head difference, m, below which square-root flow laws are smoothed so
 ## that the Jacobian stays finite (default 1e-3).
+## @item @qcode{"display"}
+## The units @code{vn_show}, @code{vn_plot} and @code{vn_report} print
+## in: an N x 2 cell array of rows @{@var{key}, @var{unit}@} (or a row
+## @{@var{key1}, @var{unit1}, @var{key2}, @var{unit2}, @dots{}@}), e.g.
+## @code{@{"flow", "m3/h"; "level", "mm"@}} (default @{@}: SI).  A key is
+## @itemize
+## @item a dimension (see @code{vn_units}): "length", "area", "volume",
+## "flow", "pressure", "temperature", "power", "time", "fraction",
+## "valve coefficient", "density", "acceleration", "rate", "heat loss",
+## "specific heat"; it applies to every value of that dimension;
+## @item otherwise a variable name ("level", "head", "spill", "duty",
+## "opening", "kv", @dots{}); it applies to that variable of every unit;
+## @item or a quantity "UNIT.VARIABLE" ("T2.level"); it applies to that
+## quantity only.
+## @end itemize
+## The most specific key wins (quantity, then variable, then dimension).
+## Each unit must belong to its key's dimension; both are checked here.
+## Values inside stay SI; only what is printed changes.
 ## @end table
 ##
 ## Models built with vesselnet must be validated against the plant before
@@ -59,19 +77,22 @@ function net = vn_network (varargin)
           "thermal",  "logical",  "",        [];
           "species",  "names",    "",        [];
           "decay",    "vector",   "1/s",     [];
-          "smooth",   "positive", "m",       []};
+          "smooth",   "positive", "m",       [];
+          "display",  "cell",     "",        []};
   [~, ~, given] = build_options (fn, label, args, spec);
 
   o = struct ("gravity", 9.80665, "density", 998.2, "cp", 4181.3,
               "ambient", 15, "thermal", false, "species", [], "decay", [],
-              "smooth", 1e-3);
+              "smooth", 1e-3, "display", []);
   o.species = {};
+  o.display = cell (0, 2);
   f = fieldnames (given);
   for i = 1:numel (f)
     o.(f{i}) = given.(f{i});
   endfor
   o.species = check_species (fn, label, o.species);
   o.decay = check_decay (fn, label, o.decay, numel (o.species));
+  o.display = check_display (fn, label, o.display);
 
   net.type = "vesselnet.network";
   net.name = name;
@@ -117,8 +138,89 @@ function d = check_decay (fn, label, d, ns)
   endif
 endfunction
 
+## Display units: rows {key, unit}; the unit must be of the key's dimension.
+function d = check_display (fn, label, d)
+  if (isempty (d))
+    d = cell (0, 2);
+    return;
+  endif
+  if (rows (d) == 1 && mod (numel (d), 2) == 0 && columns (d) != 2)
+    d = reshape (d, 2, []).';
+  endif
+  if (columns (d) != 2 || ! iscellstr (d))
+    build_error (fn, label, ["DISPLAY must be an N x 2 cell array of rows ", ...
+                             "{key, unit}, e.g. {\"flow\", \"m3/h\"; \"level\", ", ...
+                             "\"mm\"}, got %s"], build_value_str (d));
+  endif
+  t = units_table ();
+  dims = {t.dims.name};
+  [vars, vunits] = display_variables ();
+  for r = 1:rows (d)
+    key = d{r,1};
+    var = key;
+    dot = find (key == ".", 1, "last");
+    if (! isempty (dot))
+      var = key(dot+1:end);
+      if (! isvarname (key(1:dot-1)) || dot == 1)
+        build_error (fn, label, ["DISPLAY key \"%s\" is not a dimension, ", ...
+                                 "a variable or a quantity \"UNIT.VARIABLE\""], key);
+      endif
+    endif
+    k = find (strcmp (dims, key), 1);
+    if (isempty (k))
+      v = find (strcmp (vars, var), 1);
+      if (isempty (v))
+        build_error (fn, label, ["DISPLAY key \"%s\" is not a dimension, ", ...
+                                 "a variable or a quantity \"UNIT.VARIABLE\"; ", ...
+                                 "dimensions: %s; variables: %s"], key,
+                     strjoin (dims, ", "), strjoin (vars, ", "));
+      endif
+      k = find (strcmp ({t.dims.si}, vunits{v}), 1);
+    endif
+    [j, canon] = units_find (d{r,2});
+    if (j == 0 || t.dim(j) != k)
+      build_error (fn, label, ["DISPLAY unit for \"%s\" (a %s) must be one ", ...
+                               "of %s, got \"%s\""], key, t.dims(k).name,
+                   strjoin (t.dims(k).units, ", "), d{r,2});
+    endif
+    if (any (strcmp (d(1:r-1,1), key)))
+      build_error (fn, label, "DISPLAY key \"%s\" is given twice", key);
+    endif
+    d{r,2} = canon;
+  endfor
+endfunction
+
+## Variables of every kind whose unit is the SI unit of a dimension, with
+## that unit; a valve's kv is a valve coefficient.
+function [vars, vunits] = display_variables ()
+  s = vn_schema ();
+  t = units_table ();
+  si = {t.dims.si};
+  vars = {};
+  vunits = {};
+  for kind = fieldnames (s).'
+    k = s.(kind{1});
+    if (! isstruct (k) || ! isfield (k, "params"))
+      continue;
+    endif
+    nm = [k.params, k.outputs];
+    un = [k.units, k.ounits];
+    for i = 1:numel (nm)
+      u = un{i};
+      if (strcmp (nm{i}, "kv"))
+        u = "Kv";
+      endif
+      if (any (strcmp (si, u)) && ! any (strcmp (vars, nm{i})))
+        vars{end+1} = nm{i};
+        vunits{end+1} = u;
+      endif
+    endfor
+  endfor
+endfunction
+
 %!test
 %! net = vn_network ();
+%! assert (net.options.display, cell (0, 2));
 %! assert (net.type, "vesselnet.network");
 %! assert (net.name, "network");
 %! assert (net.options.gravity, 9.80665);  % standard gravity, 3rd CGPM 1901
@@ -163,3 +265,15 @@ endfunction
 %!error <vn_network: network "w": SPECIES name "a" is given twice> vn_network ("w", "species", {"a", "a"})
 %!error <vn_network: network "w": SPECIES must be a cell array of identifiers> vn_network ("w", "species", {"2x"})
 %!error <vn_network: NAME must be a non-empty char row, got 3> vn_network (3)
+
+%!test
+%! net = vn_network ("w", "display", {"flow", "m3/h"; "level", "mm"});
+%! assert (net.options.display, {"flow", "m3/h"; "level", "mm"});
+%! net = vn_network ("w", "display", {"T2.level", "ft", "temperature", "°F", "kv", "Cv"});
+%! assert (net.options.display, {"T2.level", "ft"; "temperature", "degF"; "kv", "Cv"});
+%!error <vn_network: network "w": DISPLAY unit for "level" \(a length\) must be one of m, mm, cm, km, ft, in, got "m3/h"> vn_network ("w", "display", {"level", "m3/h"})
+%!error <vn_network: network "w": DISPLAY unit for "flow" \(a flow\) must be one of m3/s, .*, got "furlong"> vn_network ("w", "display", {"flow", "furlong"})
+%!error <vn_network: network "w": DISPLAY key "colour" is not a dimension, a variable or a quantity "UNIT.VARIABLE"; dimensions: length, area> vn_network ("w", "display", {"colour", "m"})
+%!error <vn_network: network "w": DISPLAY key "flow" is given twice> vn_network ("w", "display", {"flow", "m3/h"; "flow", "L/s"})
+%!error <vn_network: network "w": DISPLAY must be an N x 2 cell array> vn_network ("w", "display", {"flow"})
+%!error <vn_network: network "w": DISPLAY must be a cell array> vn_network ("w", "display", "flow")

@@ -68,52 +68,31 @@ function res = vn_simulate (net, tspan, varargin)
     args(1) = [];
   endif
   opt = parse_options (args);
-  pk = vn_pack (net);
-  if (! isnumeric (tspan) || ! isreal (tspan) || numel (tspan) < 2
-      || any (! isfinite (tspan)))
-    error ("Octave:invalid-input-arg",
-           "vn_simulate: TSPAN must be [t0 tf] or a vector of output times (s)");
-  endif
-  if (numel (tspan) == 2)
-    t0 = tspan(1);
-    tf = tspan(2);
-    if (! (tf > t0))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: TSPAN [t0 tf] needs tf > t0, got [%g %g]", t0, tf);
-    endif
-    dt = opt.dt;
-    if (isempty (dt))
-      dt = (tf - t0) / 500;
-    endif
-    if (! (isscalar (dt) && isreal (dt) && dt > 0 && isfinite (dt)))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: option \"dt\" must be a positive time step (s)");
-    endif
-    tout = (t0:dt:tf).';
-    if (tf - tout(end) > 1e-9 * max (1, abs (tf)))
-      tout(end+1) = tf;
-    endif
+  if (isempty (opt.record))
+    cn = vn_compile (net, "results");
+    tm = cn.tmpl;
+  elseif (ischar (opt.record))
+    cn = vn_compile (net, "levels");
+    tm = cn.levels;
   else
-    tout = tspan(:);
-    if (any (diff (tout) <= 0))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: output times must increase");
-    endif
+    cn = vn_compile (net);
+    cn = vn_compile (net, "record", record_list (net, opt.record, cn.layout));
+    tm = cn.record;
   endif
-  sig = vn_pack_signals (net, u, "vn_simulate");
+  tout = sim_times (tspan, opt.dt, "vn_simulate");
+  sig = vn_pack_signals (net, u, "vn_simulate", cn);
   x0 = initial_state (opt.initial);
   so.reltol = opt.reltol;
   so.abstol = opt.abstol;
   so.solver = opt.solver;
   so.maxsteps = opt.maxsteps;
   so.maxstep = opt.maxstep;
-  [rec, recnames] = record_list (net, opt.record);
-  so.record = rec;
-  [X, Y, stats, states, ev] = __vn_simulate__ (pk, sig, tout, x0, so);
-  if (isempty (rec))
-    res = vn_results (net, tout, X, Y, states, u);
+  so.record = tm.rec;
+  [X, Y, stats, states, ev] = __vn_simulate__ (cn.pk, sig, tout, x0, so);
+  if (isempty (opt.record))
+    res = vn_results (net, tout, X, Y, states, u, tm, sig);
   else
-    res = recorded (tout, X, Y, states, recnames);
+    res = __vn_assemble__ (tm, tout, X, Y, states);
   endif
   res.events = struct ("t", ev(:,1), "unit", {{net.units(ev(:,2)).name}.'},
                        "value", ev(:,3));
@@ -177,53 +156,15 @@ function opt = parse_options (args)
   endfor
 endfunction
 
-## Output indices (0-based) and names of the recorded quantities.
-function [idx, names] = record_list (net, record)
-  idx = zeros (1, 0, "int32");
-  names = {};
-  if (isempty (record))
-    return;
-  endif
-  if (ischar (record))
-    tanks = strcmp ({net.units.kind}, "tank");
-    names = strcat ({net.units(tanks).name}, ".level");
-  else
-    names = record(:).';
-  endif
+## Output indices (0-based) of the recorded quantities NAMES.
+function idx = record_list (net, names, layout)
+  [~, first] = unique (names, "first");
+  names = names(sort (first));         # a quantity named twice is kept once
   idx = zeros (1, numel (names), "int32");
-  layout = vn_quantity (net);
-  if (ischar (record))
-    ## every tank's level: output 0 of each tank's block
-    idx(:) = layout.ooff(tanks);
-    return;
-  endif
   for j = 1:numel (names)
     q = vn_quantity (net, names{j}, "output", "vn_simulate", layout);
     idx(j) = q.index;
   endfor
-endfunction
-
-## A result holding only the recorded outputs.
-function res = recorded (t, X, Y, states, names)
-  ## grouped by unit and made in one step (many units: no growing struct)
-  dots = cellfun (@(n) find (n == ".", 1), names);
-  units = arrayfun (@(j) names{j}(1:dots(j)-1), 1:numel (names),
-                    "uniformoutput", false);
-  vars = arrayfun (@(j) names{j}(dots(j)+1:end), 1:numel (names),
-                   "uniformoutput", false);
-  [uu, ia, gs] = unique (units);      # first-seen order kept below
-  [~, ord] = sort (ia);
-  rank(ord) = 1:numel (ord);
-  un = uu(ord);
-  g = rank(gs);
-  cols = num2cell (Y, 1);
-  per = cell (1, numel (un));
-  for i = 1:numel (un)
-    j = find (g == i);
-    per{i} = cell2struct (cols(j).', vars(j).', 1);
-  endfor
-  res = cell2struct ([{t(:)}, per, {X}, {states}].',
-                     [{"t"}, un, {"x"}, {"states"}].', 1);
 endfunction
 
 function x0 = initial_state (init)

@@ -15,6 +15,7 @@ function net = build_add_unit (net, u)
   for i = 1:numel (u)
     net.index.(u(i).name) = n0 + i;
   endfor
+  net = build_bump (net, numel (u));
 endfunction
 
 %!test

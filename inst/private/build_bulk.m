@@ -66,6 +66,7 @@ function net = build_bulk (fn, kind, net, names, fixed, fixnames, args, spec, on
     endif
     net.index.(names{i}) = n0 + i;
   endfor
+  net = build_bump (net, n);
 endfunction
 
 ## One value per unit: V itself, the elements of a cell of N, or for a

@@ -22,6 +22,7 @@
 ## @item "logical"   true or false (only in @var{given})
 ## @item "names"     a cellstr or char of identifiers (only in @var{given})
 ## @item "vector"    a vector of finite values >= 0 (only in @var{given})
+## @item "cell"      a cell array (only in @var{given}; checked by the caller)
 ## @end table
 ##
 ## Numeric scalars go to @var{par}, choices to @var{aux} (the string) and
@@ -63,7 +64,7 @@ function [par, aux, given] = build_options (fn, label, args, spec)
                    upper (key), what, uom, build_value_str (v));
     endif
     switch (spec{k,2})
-      case {"ref", "matrix", "names"}
+      case {"ref", "matrix", "names", "cell"}
         given.(key) = v;
       case "logical"
         given.(key) = logical (v);
@@ -134,6 +135,9 @@ function [ok, what] = check_value (v, type, extra)
       what = "a vector of non-negative finite values";
       ok = (isnumeric (v) && isreal (v) && (isvector (v) || isempty (v))
             && all (isfinite (v(:))) && all (v(:) >= 0));
+    case "cell"
+      what = "a cell array";
+      ok = iscell (v);
     otherwise
       error ("build_options: unknown option type \"%s\"", type);
   endswitch

@@ -12,4 +12,5 @@ function net = loop_append (net, name, kind, par, aux)
     net.units(end+1) = orderfields (u, net.units(1));
   endif
   net.index.(name) = numel (net.units);
+  net = build_bump (net);
 endfunction

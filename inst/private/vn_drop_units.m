@@ -10,4 +10,5 @@ function net = vn_drop_units (net, drop)
   for i = 1:numel (net.units)
     net.index.(net.units(i).name) = i;
   endfor
+  net = build_bump (net);
 endfunction

@@ -1,12 +1,19 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{pk} =} vn_pack (@var{net})
+## @deftypefn  {} {@var{pk} =} vn_pack (@var{net})
+## @deftypefnx {} {@var{pk} =} vn_pack (@var{net}, "uncached")
 ## Pack a network struct into the flat arrays the compiled core reads.
 ##
 ## The layout is doc/internals.md section 4.  Only names are resolved here;
-## every value is checked by the core when the network is built.
+## every value is checked by the core when the network is built.  The
+## packed form comes from the cache of compiled networks (vn_compile),
+## which packs a network once until it changes; "uncached" packs afresh.
 ## @end deftypefn
 
-function pk = vn_pack (net)
+function pk = vn_pack (net, how)
+  if (nargin < 2)
+    pk = vn_compile (net).pk;
+    return;
+  endif
   if (! (isstruct (net) && isfield (net, "type")
          && strcmp (net.type, "vesselnet.network")))
     error ("Octave:invalid-input-arg",

@@ -1,15 +1,34 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{sig} =} vn_pack_signals (@var{net}, @var{u}, @var{caller})
+## @deftypefn  {} {@var{sig} =} vn_pack_signals (@var{net}, @var{u}, @var{caller})
+## @deftypefnx {} {@var{sig} =} vn_pack_signals (@var{net}, @var{u}, @var{caller}, @var{cn})
 ## Resolve signals made by vn_signal against a network and pack them for
 ## the core (doc/internals.md section 5).  Two signals on one input are an
-## error.
+## error.  Given the network's compiled form @var{cn} (vn_compile), the
+## packed signals are kept with it: the same signals on the same network
+## are packed once.  @code{sig.held} lists the signals (positions in
+## @var{u}) on inputs that are not outputs of their unit, with
+## @code{sig.hunit} and @code{sig.hvar}: the result gets those from the
+## signal, not from the core.
 ## @end deftypefn
 
-function sig = vn_pack_signals (net, u, caller)
+function sig = vn_pack_signals (net, u, caller, cn)
+  persistent keys = {};
+  persistent items = {};
   sig = [];
   if (isempty (u))
     return;
   endif
+  if (nargin < 4)
+    cn = vn_compile (net);
+  else
+    key = [cn.key, __vn_hash__(u)];
+    j = find (strcmp (keys, key), 1);
+    if (! isempty (j))
+      sig = items{j};
+      return;
+    endif
+  endif
+  layout = cn.layout;
   if (! isstruct (u) || ! all (isfield (u, {"quantity", "t", "v", "hold"})))
     error ("Octave:invalid-input-arg",
            "%s: U must be signals made by vn_signal (a struct array)", caller);
@@ -23,7 +42,9 @@ function sig = vn_pack_signals (net, u, caller)
   data = cell (1, m);
   seen = {};
   pos = 0;
-  layout = vn_quantity (net);
+  held = false (1, m);
+  hunit = hvar = cell (1, m);
+  s = vn_schema ();
   for i = 1:m
     q = vn_quantity (net, u(i).quantity, "input", caller, layout);
     if (any (strcmp (seen, q.name)))
@@ -39,6 +60,9 @@ function sig = vn_pack_signals (net, u, caller)
              "%s: signal on \"%s\" needs as many times as values (got %d and %d)",
              caller, q.name, numel (t), numel (v));
     endif
+    held(i) = ! any (strcmp (s.(q.kind).outputs, q.var));
+    hunit{i} = q.uname;
+    hvar{i} = q.var;
     unit(i) = q.unit - 1;
     slot(i) = q.slot;
     off(i) = pos;
@@ -53,4 +77,11 @@ function sig = vn_pack_signals (net, u, caller)
   sig.len = len;
   sig.hold = hold;
   sig.data = vertcat (data{:});
+  sig.held = find (held);
+  sig.hunit = hunit(held);
+  sig.hvar = hvar(held);
+  if (nargin == 4 && ! strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
+    keys = [{key}, keys(1:min (end, 7))];
+    items = [{sig}, items(1:min (end, 7))];
+  endif
 endfunction
