@@ -228,9 +228,26 @@ static void store_sens (sim *S, int k, int nt, double t, const double *x)
     }
 }
 
-/* Restart after a breakpoint or a switch; sensitivities carry on. */
-static int restart (sim *S, void *mem, double t, N_Vector y)
+/* Add the integrator's counters since its last (re)start to the run's
+ * totals: CVodeReInit sets them back to zero. */
+static void add_counts (void *mem, vn_sim_stats *st)
 {
+  long v;
+  if (CVodeGetNumSteps (mem, &v) == CV_SUCCESS) st->steps += v;
+  if (CVodeGetNumRhsEvals (mem, &v) == CV_SUCCESS) st->rhs += v;
+  if (CVodeGetNumJacEvals (mem, &v) == CV_SUCCESS) st->jac += v;
+  if (CVodeGetNumLinSolvSetups (mem, &v) == CV_SUCCESS) st->setups += v;
+  if (CVodeGetNumErrTestFails (mem, &v) == CV_SUCCESS) st->errfails += v;
+  if (CVodeGetNumNonlinSolvConvFails (mem, &v) == CV_SUCCESS)
+    st->convfails += v;
+}
+
+/* Restart after a breakpoint or a switch; sensitivities carry on, and
+ * the counts so far go to the totals. */
+static int restart (sim *S, void *mem, double t, N_Vector y,
+                    vn_sim_stats *stats)
+{
+  add_counts (mem, stats);
   int flag = CVodeReInit (mem, t, y);
   if (flag == CV_SUCCESS && S->yS)
     {
@@ -241,6 +258,41 @@ static int restart (sim *S, void *mem, double t, N_Vector y)
     }
   S->cached = 0;
   return flag;
+}
+
+/* Absolute tolerance of each state, scaled to what it holds: a volume
+ * by its tank's reference plan area times LEVEL_TOL, so every tank is
+ * integrated to the same level accuracy (a sight tube is not swamped, a
+ * reservoir not over-resolved); a tank's heat (V T) by the same volume
+ * times 1 K; its species (V c) by that volume times the largest
+ * concentration declared in the network (1 when none); any other state
+ * (valve stem, heater duty, controller) by OTHER_TOL. */
+#define LEVEL_TOL 1e-8   /* m */
+#define OTHER_TOL 1e-8
+static void state_abstol (const vn_net *net, double *atol)
+{
+  double cref = 0;
+  for (int i = 0; i < net->nu; i++)
+    {
+      const vn_unit *u = &net->u[i];
+      for (int k = 0; k < u->k->npar; k++)
+        if (strcmp (u->k->par[k].unit, "conc") == 0)
+          cref = fmax (cref, fabs (net->p[u->poff + k]));
+    }
+  if (!(cref > 0))
+    cref = 1;
+  for (int i = 0; i < net->nx; i++)
+    {
+      const vn_unit *u = &net->u[vn_state_unit (net, i)];
+      if (u->k != &vn_kind_tank)
+        {
+          atol[i] = OTHER_TOL;
+          continue;
+        }
+      int j = i - u->xoff;
+      double av = vn_tank_area_ref (net, u) * LEVEL_TOL;
+      atol[i] = j == 0 ? av : (j == 1 && net->thermal) ? av * 1.0 : av * cref;
+    }
 }
 
 static double now (void)
@@ -347,7 +399,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
   int st = switch_at_root (S, mem, *tr, N_VGetArrayPointer (y));
   if (st)
     return st;
-  if ((flag = restart (S, mem, *tr, y)) != CV_SUCCESS)
+  if ((flag = restart (S, mem, *tr, y, stats)) != CV_SUCCESS)
     return vn_fail (net, VN_ESOLVER, "simulate: restart after a switch at "
                     "t = %g failed (%s)", *tr, CVodeGetReturnFlagName (flag));
   stats->restarts++;
@@ -386,7 +438,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   if (o)
     opt = *o;
   double rtol = opt.rtol > 0 ? opt.rtol : 1e-6;
-  double atol = opt.atol > 0 ? opt.atol : 1e-8;
+  double atol = opt.atol > 0 ? opt.atol : 0;   /* 0: per state */
   long maxsteps = opt.maxsteps > 0 ? opt.maxsteps : 100000;
   int solver = opt.solver ? opt.solver
                : (net->nx <= VN_DENSE_MAX ? VN_SOLVER_DENSE : VN_SOLVER_KLU);
@@ -500,7 +552,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
     if (net->u[i].k == &vn_kind_switch)
       S.sw[j++] = i;
   SUNContext ctx = NULL;
-  N_Vector y = NULL;
+  N_Vector y = NULL, atolv = NULL;
   SUNMatrix J = NULL;
   SUNLinearSolver LS = NULL;
   void *mem = NULL;
@@ -515,6 +567,16 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       goto done;
     }
   memcpy (N_VGetArrayPointer (y), x0, (size_t) net->nx * sizeof (double));
+  if (!(atol > 0))
+    {
+      if (!(atolv = N_VClone (y)))
+        {
+          st = vn_fail (net, VN_ENOMEM, "simulate: cannot allocate the "
+                        "solver");
+          goto done;
+        }
+      state_abstol (net, N_VGetArrayPointer (atolv));
+    }
   /* No solver constraints on the volumes: the liquid gate (link.c) already
    * stops outflow from an empty tank, and constraint checks cost about
    * 15 % of a large run (bench/). */
@@ -534,7 +596,9 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       goto done;
     }
   if ((flag = CVodeInit (mem, cv_rhs, tout[0], y)) != CV_SUCCESS
-      || (flag = CVodeSStolerances (mem, rtol, atol)) != CV_SUCCESS
+      || (flag = (atol > 0 ? CVodeSStolerances (mem, rtol, atol)
+                           : CVodeSVtolerances (mem, rtol, atolv)))
+         != CV_SUCCESS
       || (flag = CVodeSetUserData (mem, &S)) != CV_SUCCESS
       || (flag = CVodeSetErrHandlerFn (mem, cv_err, &S)) != CV_SUCCESS
       || (flag = CVodeSetMaxNumSteps (mem, maxsteps)) != CV_SUCCESS
@@ -630,7 +694,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
           /* restart past the breakpoint: the inputs may jump here */
           b++;
           net->seg_end = b < nbp ? bp[b] : tout[nt - 1];
-          if ((flag = restart (&S, mem, seg, y)) != CV_SUCCESS)
+          if ((flag = restart (&S, mem, seg, y, stats)) != CV_SUCCESS)
             {
               st = vn_fail (net, VN_ESOLVER, "simulate: restart at t = %g "
                             "failed (%s)", seg, CVodeGetReturnFlagName (flag));
@@ -642,16 +706,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   stats->t_reached = t;
 stats:
   stats->wall = now () - t0w;
-  {
-    long v;
-    if (CVodeGetNumSteps (mem, &v) == CV_SUCCESS) stats->steps = v;
-    if (CVodeGetNumRhsEvals (mem, &v) == CV_SUCCESS) stats->rhs = v;
-    if (CVodeGetNumJacEvals (mem, &v) == CV_SUCCESS) stats->jac = v;
-    if (CVodeGetNumLinSolvSetups (mem, &v) == CV_SUCCESS) stats->setups = v;
-    if (CVodeGetNumErrTestFails (mem, &v) == CV_SUCCESS) stats->errfails = v;
-    if (CVodeGetNumNonlinSolvConvFails (mem, &v) == CV_SUCCESS)
-      stats->convfails = v;
-  }
+  add_counts (mem, stats);
 done:
   net->seg_end = INFINITY;
   net->stop = NULL;
@@ -663,6 +718,8 @@ done:
     SUNMatDestroy (J);
   if (y)
     N_VDestroy (y);
+  if (atolv)
+    N_VDestroy (atolv);
   if (ctx)
     SUNContext_Free (&ctx);
   free (bp);

@@ -325,6 +325,21 @@ static double map_at (const vn_unit *u, int shape, double z, double *A,
   return V;
 }
 
+/* The largest plan area: of a prism, of a round vessel's widest section,
+ * of the steepest segment of a strapping table. */
+double vn_tank_area_ref (const vn_net *net, const vn_unit *u)
+{
+  if ((int) net->p[u->poff + SHAPE] == TABLE)
+    {
+      double a = 0;
+      for (int i = 1; i < u->ntab; i++)
+        a = fmax (a, (u->tab[2 * i + 1] - u->tab[2 * i - 1])
+                     / (u->tab[2 * i] - u->tab[2 * i - 2]));
+      return a;
+    }
+  return u->d[D_AMAX];
+}
+
 /* Liquid above a nozzle at level z (above the base) of a tank, as an
  * equivalent level e, for the liquid gate and pump suction.  Prism and
  * table: e = level - z.  Round vessels: e = (V - V(z)) / Ag with
