@@ -65,8 +65,9 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
   vn_lf de;
   vn_lf *pde = dq ? &de : NULL;
   vn_lf_zero (pde);
-  double dg, g = vn_gate_liquid (vn_tank_above (net, d, 0, -1, pde),
-                                 net->smooth, 1, &dg);
+  int dry;
+  double e = vn_tank_above (net, d, 0, -1, pde, &dry);
+  double dg, g = vn_gate_liquid (e, net->smooth, dry, &dg);
   vn_lf_p (dq, vn_pcol (u, FLOW), g);
   vn_lf_axpy (dq, F * dg, pde);
   return F * g;

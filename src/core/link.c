@@ -66,7 +66,8 @@ double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
 }
 
 /* Gate on the liquid available upstream of the flow's direction: a
- * smooth step of the liquid above the nozzle (vn_tank_above). */
+ * smooth step of the liquid above the nozzle (vn_tank_above), reversing
+ * the flow in proportion to a volume below empty. */
 double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
                      double dh, double outlet, double inlet, int pc_outlet,
                      int pc_inlet, double band, vn_lf *dg)
@@ -78,12 +79,17 @@ double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
   vn_lf_zero (pes);
   vn_lf_zero (ped);
   /* without derivatives only the upstream side matters */
+  int dry;
   if (s && s->istank && (fwd || dg))
-    gs = vn_gate_liquid (vn_tank_above (net, s, outlet, pc_outlet, pes),
-                         band, outlet <= 0, &dgs);
+    {
+      double e = vn_tank_above (net, s, outlet, pc_outlet, pes, &dry);
+      gs = vn_gate_liquid (e, band, dry, &dgs);
+    }
   if (d && d->istank && (!fwd || dg))
-    gd = vn_gate_liquid (vn_tank_above (net, d, inlet, pc_inlet, ped), band,
-                         inlet <= 0, &dgd);
+    {
+      double e = vn_tank_above (net, d, inlet, pc_inlet, ped, &dry);
+      gd = vn_gate_liquid (e, band, dry, &dgd);
+    }
   if (!dg)
     return fwd ? gs : gd;
   if (s && s->istank)
@@ -94,7 +100,7 @@ double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
 }
 
 /* Below empty (an excursion of the integrator, within its tolerance) a
- * tank has no outflow.  A flow through a bottom nozzle reverses there in
+ * tank has no outflow.  A gated flow out of it reverses there in
  * proportion (vn_gate_liquid), but free discharge has no driving head
  * left, so without a further term an empty tank is a neutral state: the
  * integrator's accepted errors add up and a tank drained dry drifts ever

@@ -43,6 +43,7 @@ typedef struct sim {
   double *ycache;
   int cached;
   record rec;
+  long maxsteps;    /* steps allowed per output interval */
   char cvmsg[256];  /* the integrator's own last complaint */
 } sim;
 
@@ -302,9 +303,31 @@ static double now (void)
   return ts.tv_sec + 1e-9 * ts.tv_nsec;
 }
 
+/* What to advise when the integrator ran out of steps toward `target`:
+ * more steps only help when the last step, kept up, would get there
+ * within ten times the allowance; otherwise the step has collapsed and
+ * the cause is in the network. */
+static void too_much_work_advice (void *mem, double t, double target,
+                                  long maxsteps, char *buf, size_t len)
+{
+  double h = 0;
+  CVodeGetLastStep (mem, &h);
+  double need = h > 0 ? (target - t) / h : INFINITY;
+  if (need <= 10.0 * (double) maxsteps)
+    snprintf (buf, len, "; the steps were %.3g s long and about %.3g more "
+              "are needed to reach t = %.6g s: raise maxsteps (now %ld) "
+              "or output more often (\"dt\")", h, need, target, maxsteps);
+  else
+    snprintf (buf, len, "; the step has fallen to %.3g s, so more steps "
+              "would not help: the state named is changing abruptly (a "
+              "valve or pump switching back and forth, a controller "
+              "saturating, data far from plant values); check its data, "
+              "or give the network a larger \"smooth\" band", h);
+}
+
 /* the state whose weighted local error is largest: where trouble is */
 static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
-                      double t)
+                      double t, double target, long maxsteps)
 {
   N_Vector ele = N_VClone (y), w = N_VClone (y);
   int worst = -1;
@@ -329,10 +352,11 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
                 vn_state_var (net, worst), net->u[u].k->name,
                 net->u[u].name, N_VGetArrayPointer (y)[worst]);
     }
+  char advice[400] = "";
+  if (flag == CV_TOO_MUCH_WORK)
+    too_much_work_advice (mem, t, target, maxsteps, advice, sizeof advice);
   vn_fail (net, VN_ESOLVER, "the integrator stopped at t = %.6g s (%s)%s%s",
-           t, CVodeGetReturnFlagName (flag), where,
-           flag == CV_TOO_MUCH_WORK ? "; the network may be very stiff or "
-           "chattering: check valve and pump data, or raise maxsteps" : "");
+           t, CVodeGetReturnFlagName (flag), where, advice);
   if (ele)
     N_VDestroy (ele);
   if (w)
@@ -384,7 +408,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
       if (S->interrupted)
         return vn_fail (net, VN_EINTR, "simulate: interrupted at t = %.6g s",
                         *tr);
-      diagnose (net, mem, y, flag, *tr);
+      diagnose (net, mem, y, flag, *tr, target, S->maxsteps);
       if (S->cvmsg[0] && !S->rhs_fail)
         {
           size_t n = strlen (net->msg);
@@ -469,6 +493,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   memset (&S, 0, sizeof S);
   S.net = net;
   S.sens = sens;
+  S.maxsteps = maxsteps;
   S.rec.nodes_only = 1;
   if (opt.nyrec > 0)
     {

@@ -64,11 +64,11 @@ static inline double vn_gate (double s, double d, double *dgds)
 /* The liquid gate on the liquid s above a nozzle, band d: r (2 - r) for
  * 0 < r = s/d < 1, 1 above.  It opens with a finite slope, so a tank
  * drawn down to a nozzle approaches it exponentially (a hyperbolic rest
- * point), not along s^2.  Below the nozzle it is 0, except at a nozzle
- * in the bottom (`bottom`), where s < 0 means a volume below empty (a
- * solver excursion): there it continues as 2 r, reversing the flow in
- * proportion, so empty attracts from both sides with one slope. */
-static inline double vn_gate_liquid (double s, double d, int bottom,
+ * point), not along s^2.  Below the nozzle it is 0, except below empty
+ * (`dry`, s then the deficit, a solver excursion): there it continues as
+ * 2 r, reversing the flow in proportion, so empty attracts from both
+ * sides with one slope at a bottom nozzle. */
+static inline double vn_gate_liquid (double s, double d, int dry,
                                      double *dgds)
 {
   double r = s / d;
@@ -77,7 +77,7 @@ static inline double vn_gate_liquid (double s, double d, int bottom,
       *dgds = 0;
       return 1;
     }
-  if (r <= 0 && !bottom)
+  if (r <= 0 && !dry)
     {
       *dgds = 0;
       return 0;

@@ -340,6 +340,50 @@ double vn_tank_area_ref (const vn_net *net, const vn_unit *u)
   return u->d[D_AMAX];
 }
 
+/* Below empty: the deficit V / Ag(0) as an equivalent level (prism: the
+ * level itself; table: over its first segment's area; round: over the
+ * gate area at the bottom). */
+static double deficit (const vn_net *net, const vn_unit *u, int shape,
+                       const vn_node *nd, int pc_z, vn_lf *de)
+{
+  const double *d = u->d;
+  double V = nd->V, e;
+  if (pc_z >= 0)
+    vn_lf_p (de, pc_z, 0);
+  if (shape == PRISM)
+    {
+      vn_lf_axpy (de, 1, &nd->dH);
+      vn_lf_p (de, nd->pc_base, -1);
+      return nd->level;
+    }
+  if (shape == TABLE)
+    {
+      double a1 = (u->tab[3] - u->tab[1]) / (u->tab[2] - u->tab[0]);
+      vn_lf_x (de, u->xoff, 1 / a1);
+      return V / a1;
+    }
+  /* the gate area at the bottom, as in vn_tank_above at z = 0, so the
+   * gate's slope is the same on both sides of empty; both candidates
+   * scale with the plan (D^2, or D L) */
+  double A0, dA0, D = net->p[u->poff + DIAM];
+  map_at (u, shape, 0, &A0, &dA0);
+  double Ag = fmax (A0, GATE_AREA * d[D_AMAX]);
+  e = V / Ag;
+  vn_lf_x (de, u->xoff, 1 / Ag);
+  if (shape == HORIZ)
+    {
+      vn_lf_p (de, vn_pcol (u, DIAM), -e / D);
+      vn_lf_p (de, vn_pcol (u, LEN), -e / d[D_L]);
+    }
+  else
+    {
+      vn_lf_p (de, vn_pcol (u, DIAM), -2 * e / D);
+      if (shape == CONE)
+        vn_lf_p (de, vn_pcol (u, HEIGHT), 0);
+    }
+  return e;
+}
+
 /* Liquid above a nozzle at level z (above the base) of a tank, as an
  * equivalent level e, for the liquid gate and pump suction.  Prism and
  * table: e = level - z.  Round vessels: e = (V - V(z)) / Ag with
@@ -348,15 +392,20 @@ double vn_tank_area_ref (const vn_net *net, const vn_unit *u)
  * volume of at least GATE_AREA Amax times its band: it closes smoothly in
  * volume, at a rate the integrator resolves, instead of over a sliver of
  * volume far below its tolerance.  Elsewhere Ag = A(z) and e is the level
- * above the nozzle to first order.  Derivatives: the state, the nozzle
- * height (column pc_z) and the vessel's dimensions (scaling, as in
- * node ()). */
+ * above the nozzle to first order.  Below empty (V < 0, *dry set) e is
+ * the deficit V / Ag(0) whatever the nozzle, for the gate's reversal.
+ * Derivatives: the state, the nozzle height (column pc_z) and the
+ * vessel's dimensions (scaling, as in node ()). */
 double vn_tank_above (const vn_net *net, const vn_node *nd, double z,
-                      int pc_z, vn_lf *de)
+                      int pc_z, vn_lf *de, int *dry)
 {
   const vn_unit *u = &net->u[nd - net->nd];
   const double *d = u->d;
   int shape = (int) net->p[u->poff + SHAPE];
+  if (dry)
+    *dry = nd->V < 0;
+  if (nd->V < 0)
+    return deficit (net, u, shape, nd, pc_z, de);
   if (shape == PRISM || shape == TABLE)
     {
       vn_lf_axpy (de, 1, &nd->dH);
