@@ -36,9 +36,14 @@ function [Y, S] = fit_model (net, e, pq, p, so)
     if (want)
       sx0 = zeros (numel (x0), np);
       for i = 1:np
-        h = 1e-6 * abs (p(i));
+        ## a starting level may be zero: a forward difference there
+        h = 1e-6 * max (abs (p(i)), 1e-3);
+        lo = p(i) - h;
+        if (lo < 0 && p(i) >= 0)
+          lo = p(i);
+        endif
         sx0(:, i) = (initial (pk, pq{i}, p(i) + h, pin, e.yidx)
-                     - initial (pk, pq{i}, p(i) - h, pin, e.yidx)) / (2 * h);
+                     - initial (pk, pq{i}, lo, pin, e.yidx)) / (p(i) + h - lo);
       endfor
     endif
   endif
