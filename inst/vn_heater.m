@@ -44,6 +44,7 @@ function net = vn_heater (net, name, tank, varargin)
            "%s: heater \"%s\": TANK must name a tank of the network", fn, name);
   endif
   o = loop_options (varargin, {"duty", "max", "lag", "minlevel"}, fn, name);
+  o = loop_units (net, name, o, fn, "heater");
   par = struct ();
   if (isfield (o, "duty"))
     par.duty = loop_scalar (o.duty, "duty", name, fn, false);
