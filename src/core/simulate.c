@@ -337,26 +337,29 @@ static double now (void)
   return ts.tv_sec + 1e-9 * ts.tv_nsec;
 }
 
-/* What to advise when the integrator ran out of steps toward `target`:
- * more steps only help when the last step, kept up, would get there
- * within ten times the allowance; otherwise the step has collapsed and
- * the cause is in the network. */
-static void too_much_work_advice (void *mem, double t, double target,
-                                  long maxsteps, char *buf, size_t len)
+/* What to advise when the integrator ran out of steps between t0 and
+ * target (stopped at t): more steps help while the steps keep their
+ * length (the last one at least a tenth of the mean since t0); when the
+ * step has collapsed far below that mean, the cause is in the network. */
+static void too_much_work_advice (void *mem, double t0, double t,
+                                  double target, long maxsteps, char *buf,
+                                  size_t len)
 {
   double h = 0;
   CVodeGetLastStep (mem, &h);
-  double need = h > 0 ? (target - t) / h : INFINITY;
-  if (need <= 10.0 * (double) maxsteps)
-    snprintf (buf, len, "; the steps were %.3g s long and about %.3g more "
-              "are needed to reach t = %.6g s: raise maxsteps (now %ld) "
-              "or output more often (\"dt\")", h, need, target, maxsteps);
+  double mean = (t - t0) / (double) maxsteps;
+  if (h > 0 && h >= 0.1 * mean)
+    snprintf (buf, len, "; the steps were %.3g s long, %.3g s remain to "
+              "t = %.6g s: raise maxsteps (now %ld, at most %.3g needed at "
+              "that step) or output more often (\"dt\")", h, target - t,
+              target, maxsteps, ceil ((target - t) / h));
   else
-    snprintf (buf, len, "; the step has fallen to %.3g s, so more steps "
-              "would not help: the state named is changing abruptly (a "
-              "valve or pump switching back and forth, a controller "
-              "saturating, data far from plant values); check its data, "
-              "or give the network a larger \"smooth\" band", h);
+    snprintf (buf, len, "; the step has fallen to %.3g s (mean %.3g s), so "
+              "more steps would not help: the state named is changing "
+              "abruptly (a valve or pump switching back and forth, a "
+              "controller saturating, data far from plant values); check "
+              "its data, or give the network a larger \"smooth\" band", h,
+              mean);
 }
 
 /* CVodeGetReturnFlagName hands back a string it malloc'ed (SUNDIALS 6.4,
@@ -373,7 +376,7 @@ static const char *flag_name (int flag, char *buf, size_t len)
 
 /* the state whose weighted local error is largest: where trouble is */
 static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
-                      double t, double target, long maxsteps)
+                      double t0, double t, double target, long maxsteps)
 {
   N_Vector ele = N_VClone (y), w = N_VClone (y);
   int worst = -1;
@@ -400,7 +403,8 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
     }
   char advice[400] = "";
   if (flag == CV_TOO_MUCH_WORK)
-    too_much_work_advice (mem, t, target, maxsteps, advice, sizeof advice);
+    too_much_work_advice (mem, t0, t, target, maxsteps, advice,
+                          sizeof advice);
   vn_fail (net, VN_ESOLVER, "the integrator stopped at t = %.6g s (%s)%s%s",
            t, FLAG_NAME (flag), where, advice);
   if (ele)
@@ -447,6 +451,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
                     double *tr, int *rooted, vn_sim_stats *stats)
 {
   vn_net *net = S->net;
+  double t0 = *tr;
   int flag = CVode (mem, target, y, tr, CV_NORMAL);
   *rooted = 0;
   if (flag < 0)
@@ -455,7 +460,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
       if (S->interrupted)
         return vn_fail (net, VN_EINTR, "simulate: interrupted at t = %.6g s",
                         *tr);
-      diagnose (net, mem, y, flag, *tr, target, S->maxsteps);
+      diagnose (net, mem, y, flag, t0, *tr, target, S->maxsteps);
       if (S->cvmsg[0] && !S->rhs_fail)
         {
           size_t n = strlen (net->msg);
