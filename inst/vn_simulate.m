@@ -79,37 +79,7 @@ function res = vn_simulate (net, tspan, varargin)
     cn = vn_compile (net, "record", record_list (net, opt.record, cn.layout));
     tm = cn.record;
   endif
-  if (! isnumeric (tspan) || ! isreal (tspan) || numel (tspan) < 2
-      || any (! isfinite (tspan)))
-    error ("Octave:invalid-input-arg",
-           "vn_simulate: TSPAN must be [t0 tf] or a vector of output times (s)");
-  endif
-  if (numel (tspan) == 2)
-    t0 = tspan(1);
-    tf = tspan(2);
-    if (! (tf > t0))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: TSPAN [t0 tf] needs tf > t0, got [%g %g]", t0, tf);
-    endif
-    dt = opt.dt;
-    if (isempty (dt))
-      dt = (tf - t0) / 500;
-    endif
-    if (! (isscalar (dt) && isreal (dt) && dt > 0 && isfinite (dt)))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: option \"dt\" must be a positive time step (s)");
-    endif
-    tout = (t0:dt:tf).';
-    if (tf - tout(end) > 1e-9 * max (1, abs (tf)))
-      tout(end+1) = tf;
-    endif
-  else
-    tout = tspan(:);
-    if (any (diff (tout) <= 0))
-      error ("Octave:invalid-input-arg",
-             "vn_simulate: output times must increase");
-    endif
-  endif
+  tout = sim_times (tspan, opt.dt, "vn_simulate");
   sig = vn_pack_signals (net, u, "vn_simulate", cn);
   x0 = initial_state (opt.initial);
   so.reltol = opt.reltol;

@@ -290,7 +290,7 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
 static void store (vn_net *net, const record *R, int k, int nt, double t,
                    const double *x, double *X, double *Y)
 {
-  for (int i = 0; i < net->nx; i++)
+  for (int i = 0; X && i < net->nx; i++)    /* X NULL: states not kept */
     X[k + (long) nt * i] = x[i];
   if (!Y)
     return;

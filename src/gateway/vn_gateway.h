@@ -119,12 +119,21 @@ vn_gw_pack (const octave_value &v, vn_gw_spec &G, const char *fn)
   s.decay = G.decay.data ();
 }
 
-// Signals from the packed struct of doc/internals.md section 5.
-static inline int
-vn_gw_signals (vn_net *net, const octave_value &v, const char *fn)
+// Signals from the packed struct of doc/internals.md section 5, as the
+// arrays vn_set_signals takes (owned here).
+struct vn_gw_sig
 {
+  std::vector<int> unit, slot, off, len, hold;
+  NDArray data;
+  int n = 0;
+};
+
+static inline void
+vn_gw_sig_arrays (const octave_value &v, vn_gw_sig &S, const char *fn)
+{
+  S.n = 0;
   if (v.isempty ())
-    return vn_set_signals (net, 0, NULL, NULL, NULL, NULL, NULL, NULL);
+    return;
   if (! v.isstruct ())
     error ("%s: SIGNALS must be a packed signal struct", fn);
   octave_scalar_map sg = v.scalar_map_value ();
@@ -133,29 +142,42 @@ vn_gw_signals (vn_net *net, const octave_value &v, const char *fn)
   int32NDArray off = vn_gw_field (sg, "off", fn).int32_array_value ();
   int32NDArray len = vn_gw_field (sg, "len", fn).int32_array_value ();
   int32NDArray hold = vn_gw_field (sg, "hold", fn).int32_array_value ();
-  NDArray data = vn_gw_field (sg, "data", fn).array_value ();
+  S.data = vn_gw_field (sg, "data", fn).array_value ();
   int m = unit.numel ();
   if (slot.numel () != m || off.numel () != m || len.numel () != m
       || hold.numel () != m)
     error ("%s: packed signal arrays have inconsistent sizes", fn);
-  std::vector<int> u (m), p (m), o (m), l (m), h (m);
+  S.unit.resize (m);
+  S.slot.resize (m);
+  S.off.resize (m);
+  S.len.resize (m);
+  S.hold.resize (m);
   long need = 0;
   for (int i = 0; i < m; i++)
     {
-      u[i] = unit(i).value ();
-      p[i] = slot(i).value ();
-      o[i] = off(i).value ();
-      l[i] = len(i).value ();
-      h[i] = hold(i).value ();
-      if (o[i] < 0 || l[i] < 0)
+      S.unit[i] = unit(i).value ();
+      S.slot[i] = slot(i).value ();
+      S.off[i] = off(i).value ();
+      S.len[i] = len(i).value ();
+      S.hold[i] = hold(i).value ();
+      if (S.off[i] < 0 || S.len[i] < 0)
         error ("%s: signal %d has a negative offset or length", fn, i + 1);
-      if (2 * ((long) o[i] + l[i]) > need)
-        need = 2 * ((long) o[i] + l[i]);
+      if (2 * ((long) S.off[i] + S.len[i]) > need)
+        need = 2 * ((long) S.off[i] + S.len[i]);
     }
-  if (need > data.numel ())
+  if (need > S.data.numel ())
     error ("%s: packed signal data are too short", fn);
-  return vn_set_signals (net, m, u.data (), p.data (), o.data (), l.data (),
-                         h.data (), data.data ());
+  S.n = m;
+}
+
+static inline int
+vn_gw_signals (vn_net *net, const octave_value &v, const char *fn)
+{
+  vn_gw_sig S;
+  vn_gw_sig_arrays (v, S, fn);
+  return vn_set_signals (net, S.n, S.unit.data (), S.slot.data (),
+                         S.off.data (), S.len.data (), S.hold.data (),
+                         S.data.data ());
 }
 
 // Owns a network handle for the life of a gateway call, so every exit

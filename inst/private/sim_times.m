@@ -1,0 +1,45 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{tout} =} sim_times (@var{tspan}, @var{dt}, @var{fn})
+## Output times of a run: @var{tspan} @code{[t0 tf]} with step @var{dt}
+## (default @code{(tf - t0)/500}; @var{tf} is always included), or a vector
+## of three or more increasing times.  Messages begin with @var{fn}.
+## @end deftypefn
+
+function tout = sim_times (tspan, dt, fn)
+  if (! isnumeric (tspan) || ! isreal (tspan) || numel (tspan) < 2
+      || any (! isfinite (tspan)))
+    error ("Octave:invalid-input-arg",
+           "%s: TSPAN must be [t0 tf] or a vector of output times (s)", fn);
+  endif
+  if (numel (tspan) == 2)
+    t0 = tspan(1);
+    tf = tspan(2);
+    if (! (tf > t0))
+      error ("Octave:invalid-input-arg",
+             "%s: TSPAN [t0 tf] needs tf > t0, got [%g %g]", fn, t0, tf);
+    endif
+    if (isempty (dt))
+      dt = (tf - t0) / 500;
+    endif
+    if (! (isscalar (dt) && isreal (dt) && dt > 0 && isfinite (dt)))
+      error ("Octave:invalid-input-arg",
+             "%s: option \"dt\" must be a positive time step (s)", fn);
+    endif
+    tout = (t0:dt:tf).';
+    if (tf - tout(end) > 1e-9 * max (1, abs (tf)))
+      tout(end+1) = tf;
+    endif
+  else
+    tout = tspan(:);
+    if (any (diff (tout) <= 0))
+      error ("Octave:invalid-input-arg", "%s: output times must increase", fn);
+    endif
+  endif
+endfunction
+
+%!assert (sim_times ([0 10], 4, "f"), [0; 4; 8; 10])
+%!assert (sim_times ([0 10], [], "f")(2), 0.02)
+%!assert (sim_times ([1 2 5], [], "f"), [1; 2; 5])
+%!error <f: TSPAN \[t0 tf\] needs tf . t0> sim_times ([2 1], 1, "f")
+%!error <f: output times must increase> sim_times ([1 3 2], 1, "f")
+%!error <f: option "dt" must be a positive> sim_times ([0 1], -1, "f")
