@@ -147,7 +147,12 @@
 %!  sh = cell (1, n);
 %!  topts = cell (1, n);
 %!  for i = 1:n
-%!    [g, top(i), sh{i}] = tank_geometry (A * logu (0.3, 3), H * logu (0.5, 2), shapes);
+%!    if (strcmp (family, "closed") && i == n)
+%!      shp = {"prism"};                     # open top: nothing leaves
+%!    else
+%!      shp = shapes;
+%!    endif
+%!    [g, top(i), sh{i}] = tank_geometry (A * logu (0.3, 3), H * logu (0.5, 2), shp);
 %!    c.classes{end+1} = sh{i};
 %!    hmax = min (top(i), 2 * H);
 %!    if (rand () < 0.5)
@@ -155,10 +160,16 @@
 %!    endif
 %!    o = [g, {"base", base(i)}];
 %!    lev0 = hmax * uni (0, 0.8) * (rand () > 0.1);  # some start dry
-%!    if (rand () < 0.3 && i < n || (rand () < 0.3 && ! strcmp (family, "closed")))
+%!    ## a closed vessel spills at its top (its default rim): in a closed
+%!    ## network it spills into the next tank, never to waste
+%!    mustspill = strcmp (family, "closed") && isfinite (top(i));
+%!    if (mustspill || (rand () < 0.3 && i < n) || (rand () < 0.3 && ! strcmp (family, "closed")))
 %!      rim = min (hmax, max (lev0 * 1.05, hmax * uni (0.5, 0.95)));
+%!      if (mustspill)
+%!        rim = min (top(i), max (rim, lev0 * 1.05 + 1e-3 * top(i)));
+%!      endif
 %!      if (rim > lev0 && rim > 0)
-%!        if (i < n && rand () < 0.6)
+%!        if (i < n && (mustspill || rand () < 0.6))
 %!          o = [o, {"rim", rim, "spill", names{i+1}}];
 %!          c.classes{end+1} = "spill";
 %!        elseif (! strcmp (family, "closed"))
@@ -251,7 +262,7 @@
 %!        c.classes{end+1} = "draw";
 %!      case "pumpcurve"
 %!        H0 = hd * uni (2, 5) + max (0, max (base) - min (base));
-%!        k = H0 / Q ^ 2;
+%!        k = min (H0 / Q ^ 2, 1e14);
 %!        net = vn_pump (net, lname, names{i}, dst, "shutoff", H0, "k", k, noz{:});
 %!        c.inputs{end+1} = [lname ".speed"];
 %!    endswitch
@@ -336,6 +347,9 @@
 %!  c.H = H;
 %!  c.A = A;
 %!  c.Q = Q;
+%!  if (A < 1e-3)
+%!    c.classes{end+1} = "small";              # sight tubes, pilot vessels
+%!  endif
 %!  c.classes = unique (c.classes);
 %!endfunction
 
@@ -414,6 +428,24 @@
 %!      why = ["unexpected " why ": " err.message];
 %!    endif
 %!  end_try_catch
+%!endfunction
+
+%!function yes = endswith (s, suffix)
+%!  yes = numel (s) >= numel (suffix) && strcmp (s(end-numel(suffix)+1:end), suffix);
+%!endfunction
+
+## Step for a difference in input NAME at value U0 of a case.
+%!function h = input_step (c, name, u0, rel)
+%!  if (endswith (name, ".flow"))
+%!    h = rel * max (abs (u0), c.Q);
+%!  elseif (u0 != 0)
+%!    h = rel * abs (u0);
+%!  else
+%!    h = rel;
+%!  endif
+%!  if (endswith (name, ".opening") && u0 + h > 1)
+%!    h = -h;
+%!  endif
 %!endfunction
 
 %!function v = op_value (op, name)
@@ -508,4 +540,306 @@
 %!   endfor
 %! endfor
 %! report ("P2 closed networks conserve volume, energy, species", ncase, nprop, fails);
+%! assert (numel (fails), 0);
+
+## ---- P3: finite gains equal difference quotients of operating points --
+%!test
+%! n = prop_count (200);
+%! skip = prop_skip ();
+%! fails = {};
+%! ncase = 0;
+%! nprop = 0;
+%! nosteady = 0;
+%! for seed = prop_seeds (n, 200000)
+%!   c = prop_case (seed, pick ({"open", "open", "loop", "thermal"}));
+%!   if (skipped (c, skip) || isempty (c.inputs))
+%!     continue;
+%!   endif
+%!   [op, why] = steady_of (c);
+%!   if (isempty (op))
+%!     if (strncmp (why, "unexpected", 10))
+%!       fails = add_fail (fails, c, "P3 steady", why);
+%!     endif
+%!     nosteady++;
+%!     continue;
+%!   endif
+%!   ncase++;
+%!   try
+%!     lin = vn_linearize (c.net, op, c.inputs, c.outputs);
+%!   catch err
+%!     fails = add_fail (fails, c, "P3 linearize", err.message);
+%!     continue;
+%!   end_try_catch
+%!   for j = 1:numel (c.inputs)
+%!     u0 = input_value (c, op, c.inputs{j});
+%!     h = input_step (c, c.inputs{j}, u0, 1e-4);
+%!     [opp, whyp] = steady_of (c, c.inputs{j}, u0 + h, "initial", op);
+%!     [opm, whym] = steady_of (c, c.inputs{j}, u0 - h, "initial", op);
+%!     for i = 1:numel (c.outputs)
+%!       g = lin.gain(i,j);
+%!       nprop++;
+%!       y0 = op_value (op, c.outputs{i});
+%!       ys = max ([abs(y0), c.H * endswith(c.outputs{i}, ".level"), c.Q * endswith(c.outputs{i}, ".flow"), 1e-12]);
+%!       if (! isempty (opp) && ! isempty (opm))
+%!         fd = (op_value (opp, c.outputs{i}) - op_value (opm, c.outputs{i})) / (2 * h);
+%!         tol = 1e-4 * abs (fd) + 1e-6 * ys / abs (h);
+%!       elseif (! isempty (opp))
+%!         fd = (op_value (opp, c.outputs{i}) - y0) / h;
+%!         tol = 1e-2 * abs (fd) + 1e-6 * ys / abs (h);
+%!       elseif (! isempty (opm))
+%!         fd = (y0 - op_value (opm, c.outputs{i})) / h;
+%!         tol = 1e-2 * abs (fd) + 1e-6 * ys / abs (h);
+%!       else
+%!         fd = Inf;
+%!         tol = 0;
+%!       endif
+%!       if (isnan (g))
+%!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is NaN", c.outputs{i}, c.inputs{j}));
+%!       elseif (isinf (g) && isfinite (fd))
+%!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %g but operating points give %.6g", c.outputs{i}, c.inputs{j}, g, fd));
+%!       elseif (isfinite (g) && ! isfinite (fd))
+%!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %.6g but no operating point at %s %.6g +- %.3g (%s / %s)", c.outputs{i}, c.inputs{j}, g, c.inputs{j}, u0, h, whyp, whym));
+%!       elseif (isfinite (g) && abs (g - fd) > tol)
+%!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %.6g, operating points give %.6g", c.outputs{i}, c.inputs{j}, g, fd));
+%!       endif
+%!     endfor
+%!   endfor
+%! endfor
+%! report ("P3 gains equal operating-point differences", ncase, nprop, fails,
+%!         sprintf (" (%d cases without an operating point)", nosteady));
+%! assert (numel (fails), 0);
+
+## ---- P4: linear and nonlinear responses agree for a small step ---------
+%!test
+%! n = prop_count (200);
+%! skip = prop_skip ();
+%! fails = {};
+%! ncase = 0;
+%! nprop = 0;
+%! for seed = prop_seeds (n, 300000)
+%!   c = prop_case (seed, pick ({"open", "open", "loop", "thermal"}));
+%!   if (skipped (c, skip) || isempty (c.inputs))
+%!     continue;
+%!   endif
+%!   op = steady_of (c);
+%!   if (isempty (op))
+%!     continue;
+%!   endif
+%!   ncase++;
+%!   in = pick (c.inputs);
+%!   u0 = input_value (c, op, in);
+%!   du = input_step (c, in, u0, 1e-3);
+%!   try
+%!     sr = vn_stepresponse (c.net, op, in, du, c.outputs);
+%!   catch err
+%!     fails = add_fail (fails, c, "P4 stepresponse", err.message);
+%!     continue;
+%!   end_try_catch
+%!   for i = 1:numel (c.outputs)
+%!     nprop++;
+%!     ynl = sr.nonlinear(:,i);
+%!     yl = sr.linear(:,i);
+%!     scale = max (abs (yl));
+%!     y0 = op_value (op, c.outputs{i});
+%!     err = max (abs (ynl - yl));
+%!     ## second-order terms of a 0.1 % step are ~1e-3 of the response;
+%!     ## the integrators' own error is ~1e-6 of the value
+%!     if (! all (isfinite (ynl)) || err > 2e-2 * scale + 1e-5 * max (abs (y0), 1e-9))
+%!       fails = add_fail (fails, c, "P4 linear/nonlinear", sprintf ("%s after a step of %.3g in %s: responses differ by %.3g, response size %.3g", c.outputs{i}, du, in, err, scale));
+%!     endif
+%!   endfor
+%! endfor
+%! report ("P4 linear and nonlinear small-step responses agree", ncase, nprop, fails);
+%! assert (numel (fails), 0);
+
+## ---- P5: analytic Jacobians equal central differences ------------------
+%!test
+%! n = prop_count (200);
+%! skip = prop_skip ();
+%! fails = {};
+%! ncase = 0;
+%! nprop = 0;
+%! for seed = prop_seeds (n, 400000)
+%!   c = prop_case (seed);
+%!   if (skipped (c, skip))
+%!     continue;
+%!   endif
+%!   ncase++;
+%!   net = c.net;
+%!   pk = pack_of (net);
+%!   [f0, y0, names, x0] = deal ([]);
+%!   try
+%!     [f0, y0, names] = __vn_rhs__ (pk, []);
+%!   catch err
+%!     fails = add_fail (fails, c, "P5 rhs", err.message);
+%!     continue;
+%!   end_try_catch
+%!   ## at the declared state, and at a state moved off it at random
+%!   [~, ~, ~, ~, ~, x0] = __vn_linearize__ (pk, [], zeros (1, 0, "int32"), zeros (1, 0, "int32"), false);
+%!   xs = {x0, x0 .* (1 + 0.3 * (rand (size (x0)) - 0.5))};
+%!   pin = zeros (1, 0, "int32");
+%!   for j = 1:numel (c.inputs)
+%!     q = quantity_of (net, c.inputs{j}, "input");
+%!     pin(end+1) = q.index;
+%!     pv(j) = input_value (c, struct ("net", net), c.inputs{j});
+%!   endfor
+%!   yout = zeros (1, 0, "int32");
+%!   for i = 1:numel (c.outputs)
+%!     q = quantity_of (net, c.outputs{i}, "output");
+%!     yout(end+1) = q.index;
+%!   endfor
+%!   for k = 1:numel (xs)
+%!     x = xs{k};
+%!     [A, B, C, D] = __vn_linearize__ (pk, x, pin, yout, false);
+%!     nx = numel (x);
+%!     Afd = zeros (nx);
+%!     Cfd = zeros (numel (yout), nx);
+%!     for j = 1:nx
+%!       h = 1e-6 * max (abs (x(j)), 1e-3 * max (abs (x)) + 1e-12);
+%!       e = zeros (nx, 1);
+%!       e(j) = h;
+%!       [fp, yp] = __vn_rhs__ (pk, x + e);
+%!       [fm, ym] = __vn_rhs__ (pk, x - e);
+%!       Afd(:,j) = (fp - fm) / (2 * h);
+%!       Cfd(:,j) = (yp(double (yout) + 1) - ym(double (yout) + 1)) / (2 * h);
+%!     endfor
+%!     Bfd = zeros (nx, numel (pin));
+%!     Dfd = zeros (numel (yout), numel (pin));
+%!     for j = 1:numel (pin)
+%!       h = 1e-6 * max (abs (pv(j)), 1e-3);
+%!       if (endswith (c.inputs{j}, ".opening"))
+%!         h = min (h, min (pv(j), 1 - pv(j)) / 2);
+%!       endif
+%!       [fp, yp] = __vn_rhs__ (pk, x, pin(j), pv(j) + h);
+%!       [fm, ym] = __vn_rhs__ (pk, x, pin(j), pv(j) - h);
+%!       Bfd(:,j) = (fp - fm) / (2 * h);
+%!       Dfd(:,j) = (yp(double (yout) + 1) - ym(double (yout) + 1)) / (2 * h);
+%!     endfor
+%!     M = {A, Afd, "A"; B, Bfd, "B"; C, Cfd, "C"; D, Dfd, "D"};
+%!     for m = 1:rows (M)
+%!       an = M{m,1};
+%!       fd = M{m,2};
+%!       if (isempty (an))
+%!         continue;
+%!       endif
+%!       nprop++;
+%!       ## relative to the size of each column: differences lose about
+%!       ## 1e-6 of it to the step, and rounding eps |f| / h
+%!       cs = max (abs ([an; fd]), [], 1) + 1e-300;
+%!       bad = abs (an - fd) > 1e-5 * abs (an) + 1e-6 * cs;
+%!       if (any (bad(:)))
+%!         [r, cc] = find (bad, 1);
+%!         fails = add_fail (fails, c, "P5 Jacobian", sprintf ("%s(%d,%d) is %.8g, differences give %.8g (state %d of 2)", M{m,3}, r, cc, an(r,cc), fd(r,cc), k));
+%!       endif
+%!     endfor
+%!   endfor
+%! endfor
+%! report ("P5 analytic A, B, C, D equal central differences", ncase, nprop, fails);
+%! assert (numel (fails), 0);
+
+## ---- P6: draining to empty matches the closed form, every geometry ----
+%!function t = drain_time (shape, g, h0, h1, k)
+%!  ## time for the level to fall from h0 to h1 through Q = k sqrt (h)
+%!  switch (shape)
+%!    case "table"
+%!      lev = g.table(:,1);
+%!      vol = g.table(:,2);
+%!      t = 0;
+%!      for s = 1:numel (lev) - 1
+%!        a = max (lev(s), h1);
+%!        b = min (lev(s+1), h0);
+%!        if (b > a)
+%!          area = (vol(s+1) - vol(s)) / (lev(s+1) - lev(s));
+%!          t += area * 2 * (sqrt (b) - sqrt (a)) / k;
+%!        endif
+%!      endfor
+%!      return;
+%!    case "prism"
+%!      area = @(h) g.area * ones (size (h));
+%!    case "horizontal"
+%!      area = @(h) 2 * g.length * sqrt (max (0, h .* (g.diameter - h)));
+%!    case "sphere"
+%!      area = @(h) pi * h .* (g.diameter - h);
+%!    case "cone"
+%!      area = @(h) pi * (g.diameter / 2 * h / g.height) .^ 2;
+%!  endswitch
+%!  t = quadgk (@(h) area (h) ./ (k * sqrt (h)), h1, h0, "RelTol", 1e-10, "AbsTol", 0);
+%!endfunction
+
+%!function area = drain_area (shape, g, h)
+%!  switch (shape)
+%!    case "table"
+%!      s = find (g.table(:,1) <= h, 1, "last");
+%!      s = min (s, rows (g.table) - 1);
+%!      area = diff (g.table(s:s+1,2)) / diff (g.table(s:s+1,1));
+%!    case "prism"
+%!      area = g.area;
+%!    case "horizontal"
+%!      area = 2 * g.length * sqrt (h * (g.diameter - h));
+%!    case "sphere"
+%!      area = pi * h * (g.diameter - h);
+%!    case "cone"
+%!      area = pi * (g.diameter / 2 * h / g.height) ^ 2;
+%!  endswitch
+%!endfunction
+
+%!test
+%! n = prop_count (200);
+%! skip = prop_skip ();
+%! fails = {};
+%! ncase = 0;
+%! nprop = 0;
+%! shapes = {"prism", "horizontal", "sphere", "cone", "table"};
+%! for seed = prop_seeds (n, 500000)
+%!   rand ("state", seed);
+%!   shape = shapes{mod (seed, 5) + 1};
+%!   A = logu (1e-6, 1e4);
+%!   H = logu (0.1, 20);
+%!   [g, top] = tank_geometry (A, H, {shape});
+%!   c = struct ("seed", seed, "family", "drain", "classes", {{"drain", shape}});
+%!   if (A < 1e-3)
+%!     c.classes{end+1} = "small";
+%!   endif
+%!   if (skipped (c, skip))
+%!     continue;
+%!   endif
+%!   if (strcmp (shape, "prism") && strcmp (g{1}, "diameter"))
+%!     g = {"area", pi * g{2} ^ 2 / 4};
+%!   endif
+%!   gs = struct (g{~cellfun (@isempty, g)});
+%!   if (strcmp (shape, "prism"))
+%!     top = H;
+%!   endif
+%!   h0 = top * uni (0.3, 0.95);
+%!   ## well above the 1 mm band where the square root is smoothed
+%!   h0 = max (h0, 0.06);
+%!   h1 = max (h0 * uni (0.1, 0.5), 0.03);
+%!   cd = uni (0.55, 0.95);
+%!   tau = logu (20, 5000);
+%!   ## an orifice that takes about TAU to pass the content
+%!   a = A * h0 / (tau * cd * sqrt (2 * 9.80665 * h0));
+%!   d = sqrt (4 * a / pi);
+%!   a = pi * d ^ 2 / 4;
+%!   net = vn_network ("drain");
+%!   net = vn_tank (net, "T1", g{:}, "level", h0);
+%!   net = vn_orifice (net, "O1", "T1", "", "cd", cd, "diameter", d);
+%!   k = cd * a * sqrt (2 * 9.80665);
+%!   t1 = drain_time (shape, gs, h0, h1, k);
+%!   ncase++;
+%!   nprop++;
+%!   try
+%!     res = vn_simulate (net, [0 t1], "dt", t1 / 4);
+%!   catch err
+%!     fails = add_fail (fails, c, "P6 simulate", err.message);
+%!     continue;
+%!   end_try_catch
+%!   hend = res.T1.level(end);
+%!   ## the level error at t1 as a time error: dh / |dh/dt|
+%!   rate = k * sqrt (h1) / drain_area (shape, gs, h1);
+%!   terr = abs (hend - h1) / rate;
+%!   if (terr > 2e-3 * t1)
+%!     fails = add_fail (fails, c, "P6 drain", sprintf ("%s from %.4g m: level %.6g m at t = %.5g s, closed form %.6g m (time off by %.2g %%)", shape, h0, hend, t1, h1, 100 * terr / t1));
+%!   endif
+%! endfor
+%! report ("P6 draining matches the closed form", ncase, nprop, fails);
 %! assert (numel (fails), 0);
