@@ -136,3 +136,4 @@ endfunction
 %!error <ACTION> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "action", "sideways")
 %!error <ANTIWINDUP must be true or false> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "antiwindup", "yes")
 %!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
+%!error <vn_controller: controller "events": NAME "events" is reserved> vn_controller (net, "events", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1)
