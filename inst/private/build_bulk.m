@@ -39,8 +39,10 @@ function net = build_bulk (fn, kind, net, names, fixed, fixnames, args, spec, on
   for j = 1:numel (args)
     vals(j,:) = {args{j}};
   endfor
+  split = false (1, numel (args));     # option value given one per unit
   ## Options are split per unit only where they are well formed; anything
   ## else goes to every unit unchanged, for build_options to report.
+  isref = false (1, numel (args));
   if (mod (numel (args), 2) == 0)
     for j = 1:2:numel (args)
       key = args{j};
@@ -53,7 +55,18 @@ function net = build_bulk (fn, kind, net, names, fixed, fixnames, args, spec, on
       endif
       scalar = ! any (strcmp (spec{k,2}, {"ref", "matrix", "choice", "names", "vector"}));
       vals(j+1,:) = per_unit (fn, label, upper (key), args{j+1}, n, scalar);
+      v = args{j+1};
+      split(j+1) = iscell (v) || (scalar && (isnumeric (v) || islogical (v))
+                                  && ! isscalar (v));
+      isref(j+1) = strcmp (spec{k,2}, "ref");
     endfor
+  endif
+  if (n >= 8)
+    [done, net] = bulk_fast (fn, kind, net, names, fix, vals, split, isref,
+                             spec, one);
+    if (done)
+      return;
+    endif
   endif
   n0 = numel (net.units);
   for i = 1:n
@@ -67,6 +80,121 @@ function net = build_bulk (fn, kind, net, names, fixed, fixnames, args, spec, on
     net.index.(names{i}) = n0 + i;
   endfor
   net = build_bump (net, n);
+endfunction
+
+## The bulk form in time linear in the number of units.  Names and
+## references are checked as vectors: every name an unused identifier,
+## every reference a unit declared before the one naming it, no element
+## joining a unit to itself.  Units whose options are equal and whose
+## references name units of the same kinds (or none) are alike: the
+## single-unit builder ONE checks the first of them, against the network
+## holding every unit before it, as a loop of single calls would, and the
+## others are made from its unit with their own name and references.
+## When any vector check fails, DONE is false and the loop of single calls
+## (in build_bulk) runs instead, so the message is the one it gives.
+function [done, net] = bulk_fast (fn, kind, net, names, fix, vals, split, isref,
+                                  spec, one)
+  done = false;
+  n = numel (names);
+  n0 = numel (net.units);
+  ## per-unit options must be plain numbers, or references
+  num = split & ! isref;
+  for j = find (num)
+    c = vals(j,:);
+    if (! (all (cellfun ("isreal", c)) && all (cellfun ("numel", c) == 1)
+           && all (cellfun (@isnumeric, c) | cellfun ("islogical", c))))
+      return;
+    endif
+  endfor
+  refs = [fix; vals(split & isref, :)];
+  if (! (iscellstr (refs) && all (cellfun ("size", refs(:), 1) <= 1)))
+    return;
+  endif
+  refs(cellfun ("isempty", refs)) = {""};
+  ## names: identifiers, unique, not taken
+  if (n0 > 0)
+    old = {net.units.name};
+    oldkinds = {net.units.kind};
+  else
+    old = oldkinds = {};
+  endif
+  ok = ! cellfun ("isempty", regexp (names, "^[A-Za-z][A-Za-z0-9_]{0,62}$",
+                                     "once"));
+  if (! all (ok) || any (ismember (names, iskeyword ()))
+      || numel (unique (names)) < n || any (ismember (names, old)))
+    return;
+  endif
+  ## references: declared before the unit naming them, never the unit itself
+  allnames = [old, names];
+  [~, pos] = ismember (refs, allnames);
+  empty = cellfun ("isempty", refs);
+  mine = pos - n0;                       # position in this call, if there
+  if (any (! empty(:) & (pos(:) == 0 | mine(:) >= repmat (1:n, rows (refs), 1)(:)))
+      || any (strcmp (refs, repmat (names, rows (refs), 1))(:)))
+    return;
+  endif
+  if (rows (fix) == 2 && any (strcmp (fix(1,:), fix(2,:)) & ! empty(1,:)))
+    return;
+  endif
+  allkinds = [oldkinds, repmat({kind}, 1, n)];
+  [ukinds, ~, kcode] = unique (allkinds);
+  rk = zeros (size (refs));
+  rk(! empty) = kcode(pos(! empty));
+  ## units alike: equal option values, references to the same kinds
+  sig = rk.';
+  for j = find (num)
+    c = cellfun (@double, vals(j,:));
+    sig = [sig, c(:)];
+  endfor
+  [~, first, grp] = unique (sig, "rows", "first");
+  grp = grp(:).';
+  [first, order] = sort (first(:).');
+  tmpl = cell (1, numel (first));
+  made = 0;                               # units 1..made are in NET
+  for g = 1:numel (first)
+    i = first(g);
+    net = append_units (net, names, refs, grp, tmpl, made + 1, i - 1);
+    made = i - 1;
+    u = one (fn, net, names{i}, fix(:,i).', vals(:,i).', spec);
+    ## where each reference of the unit went (from, to), if anywhere
+    slots = struct ("from", find (strcmp (refs(:,i), u.from) & ! empty(:,i), 1),
+                    "to", find (strcmp (refs(:,i), u.to) & ! empty(:,i), 1));
+    tmpl{order(g)} = struct ("u", u, "slots", slots);
+  endfor
+  net = append_units (net, names, refs, grp, tmpl, made + 1, n);
+  net = build_bump (net, n);
+  done = true;
+endfunction
+
+## Add units A..B of a bulk call, made from their templates, in one step.
+function net = append_units (net, names, refs, grp, tmpl, a, b)
+  if (b < a)
+    return;
+  endif
+  idx = a:b;
+  g = grp(idx);
+  U = repmat (tmpl{g(1)}.u, 1, numel (idx));
+  for t = unique (g)
+    T = tmpl{t};
+    at = find (g == t);
+    U(at) = repmat (T.u, 1, numel (at));
+    for f = {"from", "to"}
+      k = T.slots.(f{1});
+      if (! isempty (k))
+        [U(at).(f{1})] = refs{k, idx(at)};
+      endif
+    endfor
+  endfor
+  [U.name] = names{idx};
+  n0 = numel (net.units);
+  if (n0 == 0)
+    net.units = U;
+  else
+    net.units(n0+1:n0+numel (U)) = U;
+  endif
+  f = [fieldnames(net.index); names(idx).'];
+  v = [struct2cell(net.index); num2cell(n0 + (1:numel (idx))).'];
+  net.index = cell2struct (v, f, 1);
 endfunction
 
 ## One value per unit: V itself, the elements of a cell of N, or for a
@@ -137,6 +265,54 @@ endfunction
 %! assert (net.units(2).to, "A");
 %! assert (net.units(2).table, tabs{2});
 %! assert ([net.index.A, net.index.B], [1 2]);
+
+%!test
+%! ## The linear-time path (8 units or more) builds what a loop builds:
+%! ## spills into tanks of the same call, orifices to tanks and to waste,
+%! ## per-unit values, a boundary as a source.
+%! n = 12;
+%! T = arrayfun (@(i) sprintf ("T%d", i), 1:n, "uniformoutput", false);
+%! O = arrayfun (@(i) sprintf ("O%d", i), 1:n, "uniformoutput", false);
+%! lv = 0.5 + mod (1:n, 3) / 2;
+%! sp = [{""}, T(1:end-1)];
+%! rim = 2 + mod (1:n, 2);
+%! loop = vn_boundary (vn_network ("b"), "R0", "head", 3);
+%! for i = 1:n
+%!   loop = vn_tank (loop, T{i}, "area", 2, "level", lv(i), "rim", rim(i),
+%!                   "spill", sp{i});
+%! endfor
+%! to = [T(2:end), {""}];
+%! from = [{"R0"}, T(2:end)];
+%! for i = 1:n
+%!   loop = vn_orifice (loop, O{i}, from{i}, to{i}, "coeff", 0.01 * i);
+%! endfor
+%! bulk = vn_boundary (vn_network ("b"), "R0", "head", 3);
+%! bulk = vn_tank (bulk, T, "area", 2, "level", lv, "rim", rim, "spill", sp);
+%! bulk = vn_orifice (bulk, O, from, to, "coeff", 0.01 * (1:n));
+%! assert (isequal (bulk, loop));
+%! assert (bulk.index.O7, 20);
+%! assert (bulk.units(20).from, "T7");
+
+%!test
+%! ## bad input in a large bulk call gives the message of the loop
+%! T = arrayfun (@(i) sprintf ("T%d", i), 1:10, "uniformoutput", false);
+%! net = vn_tank (vn_network ("m"), T, "area", 1);
+%! O = arrayfun (@(i) sprintf ("O%d", i), 1:10, "uniformoutput", false);
+%! to = [T(2:end), {"T3"}];
+%! to{5} = "Q";
+%! try
+%!   vn_orifice (net, O, T, to, "coeff", 0.01);
+%!   assert (false);
+%! catch err
+%!   assert (err.message, "vn_orifice: orifice \"O5\": TO names unit \"Q\", which network \"m\" does not hold; declare the tank or boundary first");
+%! end_try_catch
+%! O{9} = "T2";
+%! try
+%!   vn_orifice (net, O, T, [T(2:end), {""}], "coeff", 0.01);
+%!   assert (false);
+%! catch err
+%!   assert (err.message, "vn_orifice: orifice \"T2\": NAME \"T2\" is already taken by a tank in network \"m\"; unit names must be unique");
+%! end_try_catch
 
 %!error <vn_tank: tank "B": SPILL names unit "C", which network "network" does not hold> vn_tank (vn_network (), {"A", "B", "C"}, "area", 1, "rim", 2, "spill", {"", "C", ""})
 %!error <vn_tank: tank "T1" to "T3": LEVEL must be a scalar, or a vector or cell array of one value per unit \(3\), got a 1x2 double> vn_tank (vn_network (), {"T1", "T2", "T3"}, "area", 1, "level", [1 2])

@@ -288,12 +288,48 @@ int vn_noutputs (const vn_net *net) { return net->ny; }
 int vn_nparams (const vn_net *net) { return net->np; }
 int vn_nunits (const vn_net *net) { return net->nu; }
 
+/* Which block of a unit: its states, parameters or outputs. */
+enum { BLK_X, BLK_P, BLK_Y };
+
+static void block (const vn_unit *u, int which, int *off, int *n)
+{
+  *off = which == BLK_X ? u->xoff : which == BLK_P ? u->poff : u->yoff;
+  *n = which == BLK_X ? u->nx : which == BLK_P ? u->k->npar : u->nout;
+}
+
+/* The unit whose block [off, off + n) holds index i: blocks follow unit
+ * order, so the owner is the last unit starting at or before i (a unit
+ * with an empty block there starts after it), found by bisection so that
+ * naming every state of a large network stays linear; -1 if none. */
+static int owner (const vn_net *net, int i, int which)
+{
+  int lo = 0, hi = net->nu - 1, j = -1, off, n;
+  while (lo <= hi)
+    {
+      int m = lo + (hi - lo) / 2;
+      block (&net->u[m], which, &off, &n);
+      if (off <= i)
+        {
+          j = m;
+          lo = m + 1;
+        }
+      else
+        hi = m - 1;
+    }
+  if (j < 0)
+    return -1;
+  block (&net->u[j], which, &off, &n);
+  return i < off + n ? j : -1;
+}
+
 int vn_state_unit (const vn_net *net, int i)
 {
-  for (int j = 0; j < net->nu; j++)
-    if (i >= net->u[j].xoff && i < net->u[j].xoff + net->u[j].nx)
-      return j;
-  return -1;
+  return owner (net, i, BLK_X);
+}
+
+int vn_output_unit (const vn_net *net, int i)
+{
+  return owner (net, i, BLK_Y);
 }
 
 const char *vn_state_var (const vn_net *net, int i)
@@ -336,10 +372,7 @@ double vn_param_get (const vn_net *net, int index)
 
 static int unit_of_param (const vn_net *net, int index)
 {
-  for (int j = 0; j < net->nu; j++)
-    if (index >= net->u[j].poff && index < net->u[j].poff + net->u[j].k->npar)
-      return j;
-  return -1;
+  return owner (net, index, BLK_P);
 }
 
 int vn_param_set (vn_net *net, int index, double value)

@@ -436,9 +436,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
               return vn_fail (net, VN_EARG, "simulate: recorded output %d "
                               "has index %d outside the network", j + 1, yi);
             }
-          for (int i = 0; i < net->nu && u < 0; i++)
-            if (yi >= net->u[i].yoff && yi < net->u[i].yoff + net->u[i].nout)
-              u = i;
+          u = vn_output_unit (net, yi);
           S.rec.unit[j] = u;
           S.rec.nodes_only &= net->u[u].k->role == VN_ROLE_NODE;
         }

@@ -173,6 +173,9 @@ struct vn_net {
   char msg[1024];
 };
 
+/* The unit owning output i (-1 if none), by bisection. */
+int vn_output_unit (const vn_net *net, int i);
+
 /* kinds */
 extern const vn_kind vn_kind_tank, vn_kind_boundary, vn_kind_feed,
   vn_kind_orifice, vn_kind_resistance, vn_kind_valve, vn_kind_pump,

@@ -3,6 +3,7 @@
 // YS: output sensitivities (nt x nout x np) when opts.sens is given.
 // Integrate a packed network; x0 empty = from the declared levels.
 #include "vn_gateway.h"
+#include "vn_gw_cache.h"
 
 static const char *FN = "vn_simulate";
 
@@ -18,10 +19,9 @@ DEFUN_DLD (__vn_simulate__, args, ,
                                                     "vector", FN);
   octave_scalar_map o = args(4).xscalar_map_value ("%s: OPTS must be a "
                                                    "struct", FN);
-  vn_gw_spec G;
-  vn_gw_net H;
-  vn_gw_build (args(0), G, H, FN);
-  vn_net *net = H.net;
+  // the built handle is kept with the packed value (vn_gw_cache.h)
+  vn_gw_held &held = vn_gw_cached_build (args(0), FN);
+  vn_net *net = held.net;
   vn_gw_check (net, vn_gw_signals (net, args(1), FN), FN);
   int nx = vn_nstates (net), ny = vn_noutputs (net);
   ColumnVector x0 (nx);
@@ -102,10 +102,7 @@ DEFUN_DLD (__vn_simulate__, args, ,
   sm.assign ("solver", stats.solver == VN_SOLVER_KLU ? "klu" : "dense");
   sm.assign ("t_reached", stats.t_reached);
   vn_gw_check (net, st, FN);
-  Cell names (nx, 1);
-  for (int i = 0; i < nx; i++)
-    names(i) = std::string (vn_unit_name (net, vn_state_unit (net, i)))
-               + "." + vn_state_var (net, i);
+  const Cell &names = vn_gw_state_names (held);
   long ne = vn_nevents (net);
   Matrix ev (ne, 3);
   for (long i = 0; i < ne; i++)
