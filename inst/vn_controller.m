@@ -79,8 +79,8 @@ function net = vn_controller (net, name, varargin)
     a = o.action;
     if (! ischar (a) || ! any (strcmpi (a, {"reverse", "direct"})))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": ACTION must be \"reverse\" or \"direct\"",
-             fn, name);
+             "%s: controller \"%s\": ACTION must be \"reverse\" or \"direct\", got %s",
+             fn, name, build_value_str (a));
     endif
     par.action = double (strcmpi (a, "reverse"));
     aux.action = lower (a);
@@ -90,8 +90,8 @@ function net = vn_controller (net, name, varargin)
     if (! (isnumeric (L) && isreal (L) && numel (L) == 2 && L(1) < L(2)
            && ! any (isnan (L))))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi",
-             fn, name);
+             "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi, got %s",
+             fn, name, build_value_str (L));
     endif
     par.lo = L(1);
     par.hi = L(2);
@@ -100,8 +100,8 @@ function net = vn_controller (net, name, varargin)
     a = o.antiwindup;
     if (! ((islogical (a) || isnumeric (a)) && isscalar (a) && ! isnan (a)))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": ANTIWINDUP must be true or false", fn,
-             name);
+             "%s: controller \"%s\": ANTIWINDUP must be true or false, got %s",
+             fn, name, build_value_str (a));
     endif
     par.antiwindup = double (logical (a));
   endif

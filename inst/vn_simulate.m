@@ -68,6 +68,7 @@ function res = vn_simulate (net, tspan, varargin)
     args(1) = [];
   endif
   opt = parse_options (args);
+  build_check_net ("vn_simulate", net);
   if (isempty (opt.record))
     cn = vn_compile (net, "results");
     tm = cn.tmpl;

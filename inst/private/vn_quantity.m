@@ -32,9 +32,13 @@ function q = vn_quantity (net, name, what, caller, layout)
   var = name(dot+1:end);
   ui = build_find_unit (net, uname);
   if (ui == 0)
+    names = {net.units.name};
+    if (numel (names) > 20)
+      names = [names(1:20), {sprintf("... (%d more)", numel (names) - 20)}];
+    endif
     error ("Octave:invalid-input-arg",
-           "%s: quantity \"%s\": the network has no unit \"%s\"", caller,
-           name, uname);
+           "%s: quantity \"%s\": the network has no unit \"%s\"; units: %s",
+           caller, name, uname, strjoin (names, ", "));
   endif
   s = vn_schema ();
   kind = net.units(ui).kind;

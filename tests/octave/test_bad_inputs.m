@@ -80,7 +80,7 @@
 ## ---- controllers and switches -------------------------------------
 %!error <vn_controller: controller "LC1": quantity "T1.colour": colour is not an output of tank "T1"; outputs: level, volume, head, spill> vn_controller (net, "LC1", "measure", "T1.colour", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2)
 %!error <vn_controller: controller "LC1": quantity "T1.level": level is not an input of tank "T1": a tank has no inputs; inputs in network "w": F1.flow, LV1.opening> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "T1.level", "setpoint", 1, "gain", 2)
-%!error <vn_controller: unit "LC1": unknown option "colour"; allowed: measure, manipulate> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "colour", 3)
+%!error <vn_controller: controller "LC1": unknown option "colour"; allowed: measure, manipulate> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "colour", 3)
 %!error <vn_switch: switch "LS1": ON and OFF set points are equal \(1\)> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "F1.flow", "on", 1, "off", 1)
 %!error <vn_switch: switch "LS1": VALUES must be \[off-value on-value\]> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 2, "off", 1, "values", [0 1 2])
 ## a range only the core checks, reported through vn_simulate

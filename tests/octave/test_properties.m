@@ -197,6 +197,7 @@
 %!  c.tanks = names;
 %!  c.inputs = {};
 %!  hd = 0.5 * min (min (top), H);           # design head of the links
+%!  Qf = Q * uni (0.3, 1);                   # feed flow
 %!  ## links down the chain; a closed network returns liquid by a pump
 %!  nl = 0;
 %!  for i = 1:n
@@ -245,7 +246,7 @@
 %!      case "valve"
 %!        ch = pick ({"linear", "equal", "quick"});
 %!        dpbar = 998.2 * 9.80665 * hd / 1e5;
-%!        kv = Q * 3600 / (0.5 * sqrt (dpbar));
+%!        kv = min (Q * 3600 / (0.5 * sqrt (dpbar)), 1e6);
 %!        vo = {"kv", kv, "opening", uni(0.2, 0.9), "characteristic", ch};
 %!        if (rand () < 0.3)
 %!          vo = [vo, {"lag", logu(1, 60)}];
@@ -253,13 +254,17 @@
 %!        net = vn_valve (net, lname, names{i}, dst, vo{:}, noz{:});
 %!        c.inputs{end+1} = [lname ".opening"];
 %!      case "pumpfixed"
-%!        f = Q * uni (0.3, 1.2);
+%!        ## most draw less than the feed; some more, and pump a tank dry
 %!        if (strcmp (family, "closed"))
 %!          f = Q * uni (0.2, 0.8);
+%!        elseif (rand () < 0.25)
+%!          f = Qf * uni (1.1, 2);
+%!          c.classes{end+1} = "drydraw";
+%!        else
+%!          f = Qf * uni (0.2, 0.9);
 %!        endif
 %!        net = vn_pump (net, lname, names{i}, dst, "flow", f, noz{:});
 %!        c.inputs{end+1} = [lname ".speed"];
-%!        c.classes{end+1} = "draw";
 %!      case "pumpcurve"
 %!        H0 = hd * uni (2, 5) + max (0, max (base) - min (base));
 %!        k = min (H0 / Q ^ 2, 1e14);
@@ -276,7 +281,7 @@
 %!    c.links{end+1} = "X1";
 %!  endif
 %!  if (! strcmp (family, "closed"))
-%!    fo = {"flow", Q * uni(0.3, 1)};
+%!    fo = {"flow", Qf};
 %!    if (thermal)
 %!      fo = [fo, {"temperature", uni(5, 60)}];
 %!    endif
