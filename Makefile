@@ -51,6 +51,17 @@ OCTAVE_SETUP = more off; warning ('off', 'Octave:gnuplot-graphics'); \
 
 all: $(LIB)
 	@$(SUBMAKE) oct
+	@$(if $(MPICC),$(MAKE) --no-print-directory $(CLUSTER),true)
+
+## The MPI program of vn_ensemble (..., "cluster", ...): built only where
+## mpicc exists (Debian: openmpi-bin, libopenmpi-dev).
+MPICC   := $(shell command -v mpicc 2>/dev/null)
+CLUSTER := $(BUILD)/bin/vn_cluster
+
+$(CLUSTER): src/cluster/vn_cluster.c $(wildcard src/core/*.h) $(LIB)
+	@mkdir -p $(dir $@)
+	$(MPICC) $(CORE_CFLAGS) -Isrc/core -I$(SUITESPARSE_INC) $< $(LIB) \
+	  $(VN_LIBS) -o $@
 
 ## src/Makefile knows the core's dependencies; asking it every time is cheap.
 $(LIB): FORCE
@@ -111,7 +122,7 @@ bench: deps all
 
 DIST_FILES = DESCRIPTION COPYING NEWS INDEX $(wildcard README.md) \
              $(wildcard inst doc demos) src/Makefile \
-             $(wildcard src/core src/gateway)
+             $(wildcard src/core src/gateway src/cluster)
 
 dist:
 	@rm -f $(TARBALL)

@@ -62,6 +62,7 @@ function net = vn_controller (net, name, varargin)
   o = loop_options (varargin, allowed, fn, name, "controller",
                     {"measure", "manipulate", "setpoint", "gain"});
   aux = loop_refs (net, name, o, fn);
+  o = loop_units (net, name, o, fn, "controller");
   par = struct ();
   par.setpoint = loop_scalar (o.setpoint, "setpoint", name, fn, false);
   par.gain = loop_scalar (o.gain, "gain", name, fn, false);

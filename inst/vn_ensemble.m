@@ -67,6 +67,16 @@
 ## state vector); default: each run from its declared levels.
 ## @item @qcode{"reltol"}, @qcode{"abstol"}, @qcode{"solver"}, @qcode{"maxsteps"}, @qcode{"maxstep"}
 ## as for @code{vn_simulate}.
+## @item @qcode{"cluster"}
+## a launcher command, e.g. @qcode{"mpirun -np 8 --hostfile hosts"} or a
+## scheduler's own: the runs are spread over MPI ranks by the standalone
+## program @code{vn_cluster} (built by @code{make} where @command{mpicc}
+## exists; or set @env{VN_CLUSTER_BIN}).  The job goes to a file, the
+## launcher is started on it and waited for, with progress shown after
+## 5 s (every second with @qcode{"verbose"}); the same @var{ens} comes
+## back.  Only the launching host must see the job file; ranks get it by
+## MPI.  Threads per rank: @env{VN_WORKERS} (default 1).  Ctrl-C stops
+## the launcher.
 ## @item @qcode{"verbose"}
 ## print the runs, failures and time when done.
 ## @end table
@@ -141,8 +151,13 @@ function ens = vn_ensemble (net, tspan, varargin)
   so = struct ("reltol", opt.reltol, "abstol", opt.abstol,
                "solver", opt.solver, "maxsteps", opt.maxsteps,
                "maxstep", opt.maxstep, "record", rec, "workers", opt.workers);
-  [Y, status, msgs, steps, wall] = __vn_ensemble__ (cn.pk, sig, tout, x0, so,
-                                                    pidx, P(:, model));
+  if (isempty (opt.cluster))
+    [Y, status, msgs, steps, wall] = __vn_ensemble__ (cn.pk, sig, tout, x0, so,
+                                                      pidx, P(:, model));
+  else
+    [Y, status, msgs, steps, wall] = run_cluster (opt, cn.pk, sig, tout, x0,
+                                                  so, pidx, P(:, model));
+  endif
   ens = summarise (tout, names, units, Y, P, pnames, status, msgs);
   ens.stats = struct ("wall", wall, "workers", min (opt.workers, rows (P)),
                       "steps", steps, "runs", rows (P),
@@ -157,7 +172,7 @@ function opt = parse_options (args)
   opt = struct ("vary", [], "draws", [], "record", [], "dt", [], "seed", [],
                 "workers", nproc (), "initial", [], "reltol", 1e-6,
                 "abstol", 1e-8, "solver", 0, "maxsteps", 100000,
-                "maxstep", 0, "verbose", false);
+                "maxstep", 0, "verbose", false, "cluster", "");
   [names, vals] = vn_option_pairs (args, "vn_ensemble");
   for i = 1:numel (names)
     name = lower (names{i});
@@ -222,12 +237,105 @@ function opt = parse_options (args)
         opt.solver = j - 1;
       case "verbose"
         opt.verbose = logical (val);
+      case "cluster"
+        if (! (ischar (val) && rows (val) == 1 && ! isempty (strtrim (val))))
+          error ("Octave:invalid-input-arg",
+                 "vn_ensemble: option \"cluster\" must be the launcher command, e.g. \"mpirun -np 8 --hostfile hosts\"");
+        endif
+        opt.cluster = val;
       otherwise
         error ("Octave:invalid-input-arg",
-               "vn_ensemble: unknown option \"%s\"; allowed: vary, draws, record, dt, seed, workers, initial, reltol, abstol, solver, maxsteps, maxstep, verbose",
+               "vn_ensemble: unknown option \"%s\"; allowed: vary, draws, record, dt, seed, workers, initial, reltol, abstol, solver, maxsteps, maxstep, cluster, verbose",
                names{i});
     endswitch
   endfor
+endfunction
+
+## The runs on MPI ranks: the job goes to a file, the launcher starts the
+## standalone program on it (in the background, its own process group),
+## and the results file comes back; progress is shown while it runs.
+function [Y, status, msgs, steps, wall] = run_cluster (opt, pk, sig, tout, x0,
+                                                       so, pidx, P)
+  bin = getenv ("VN_CLUSTER_BIN");
+  if (isempty (bin))
+    bin = fullfile (fileparts (which ("__vn_ensemble__")), "..", "bin",
+                    "vn_cluster");
+  endif
+  if (! exist (bin, "file"))
+    error ("vesselnet:cluster-failure",
+           "vn_ensemble: the MPI program vn_cluster was not found at %s; build it with \"make\" where mpicc exists (Debian: openmpi-bin, libopenmpi-dev) or set VN_CLUSTER_BIN",
+           bin);
+  endif
+  wd = tempname ();
+  mkdir (wd);
+  pid = 0;
+  finished = false;
+  unwind_protect
+    job = fullfile (wd, "job.vnj");
+    res = fullfile (wd, "results.vnr");
+    prog = fullfile (wd, "progress");
+    logf = fullfile (wd, "log");
+    rcf = fullfile (wd, "status");
+    so.jobfile = job;
+    __vn_ensemble__ (pk, sig, tout, x0, so, pidx, P);
+    cmd = sprintf ("%s %s %s %s %s > %s 2>&1; echo $? > %s.tmp && mv %s.tmp %s",
+                   opt.cluster, quote (bin), quote (job), quote (res),
+                   quote (prog), quote (logf), quote (rcf), quote (rcf),
+                   quote (rcf));
+    [st, out] = system (sprintf ("setsid sh -c %s < /dev/null > /dev/null 2>&1 & echo $!",
+                                 quote (cmd)));
+    pid = str2double (out);
+    if (st != 0 || isnan (pid))
+      error ("vesselnet:cluster-failure",
+             "vn_ensemble: cannot start the launcher \"%s\"", opt.cluster);
+    endif
+    t0 = tic ();
+    shown = 0;
+    while (! exist (rcf, "file"))
+      pause (0.1);
+      el = toc (t0);
+      if ((opt.verbose && el - shown >= 1) || (el >= 5 && el - shown >= 5))
+        printf ("vn_ensemble: %d of %d runs done on the cluster (%.0f s)\n",
+                runs_done (wd), rows (P), el);
+        fflush (stdout);
+        shown = el;
+      endif
+    endwhile
+    finished = true;
+    code = str2double (fileread (rcf));
+    if (code != 0)
+      txt = strtrim (fileread (logf));
+      error ("vesselnet:cluster-failure",
+             "vn_ensemble: the cluster job \"%s\" ended with status %d: %s",
+             opt.cluster, code, txt(1:min (end, 2000)));
+    endif
+    [Y, status, msgs, steps, wall] = __vn_ensemble__ ("read", res);
+  unwind_protect_cleanup
+    if (pid > 0 && ! finished)
+      system (sprintf ("kill -TERM -- -%d 2>/dev/null", pid));
+    endif
+    confirm_recursive_rmdir (false, "local");
+    rmdir (wd, "s");
+  end_unwind_protect
+endfunction
+
+## Runs finished so far: the sum over the ranks' progress files.
+function n = runs_done (wd)
+  n = 0;
+  f = dir (fullfile (wd, "progress.*"));
+  for k = 1:numel (f)
+    if (! isempty (regexp (f(k).name, '^progress\.\d+$', "once")))
+      v = str2double (fileread (fullfile (wd, f(k).name)));
+      if (isfinite (v))
+        n += v;
+      endif
+    endif
+  endfor
+endfunction
+
+## A string quoted for the shell.
+function q = quote (s)
+  q = ["'" strrep(s, "'", "'\\''") "'"];
 endfunction
 
 ## Names and the runs x parameters table of "vary".

@@ -27,6 +27,12 @@
 ##
 ## Before its first time a signal keeps its first value, after its last
 ## time its last value; every time is a breakpoint of the integrator.
+##
+## The scalar arguments may be texts "VALUE UNIT" (see @code{vn_units}):
+## times in a unit of time (@qcode{"10 min"}), values in a unit of the
+## input's dimension (@qcode{"36 m3/h"} for a flow, @qcode{"40 %"} for an
+## opening); a pulse's @var{amplitude} is a difference (@qcode{"18 degF"}
+## is 10 degC).  The table form takes numbers in SI.
 ## Signals combine into an array: @code{u(2) = vn_signal (@dots{})}.
 ##
 ## @seealso{vn_simulate, vn_feed, vn_valve, vn_pump}
@@ -56,13 +62,13 @@ function u = vn_signal (quantity, kind, varargin)
     case "step"
       names = {"T0", "BEFORE", "AFTER"};
       check_count (fn, label, kind, a, names);
-      x = scalars (fn, label, a, names);
+      x = scalars (fn, label, a, names, quantity, [1 0 0]);
       t = [x(1); x(1)];
       v = [x(2); x(3)];
     case "ramp"
       names = {"T0", "T1", "V0", "V1"};
       check_count (fn, label, kind, a, names);
-      x = scalars (fn, label, a, names);
+      x = scalars (fn, label, a, names, quantity, [1 1 0 0]);
       if (! (x(2) > x(1)))
         build_error (fn, label, "T1 must be later than T0 (%s s), got %s",
                      build_value_str (x(1)), build_value_str (x(2)));
@@ -72,7 +78,7 @@ function u = vn_signal (quantity, kind, varargin)
     case "pulse"
       names = {"T0", "WIDTH", "BASE", "AMPLITUDE"};
       check_count (fn, label, kind, a, names);
-      x = scalars (fn, label, a, names);
+      x = scalars (fn, label, a, names, quantity, [1 1 0 2]);
       if (! (x(2) > 0))
         build_error (fn, label, "WIDTH must be a positive finite scalar (s), got %s",
                      build_value_str (x(2)));
@@ -110,11 +116,21 @@ function check_count (fn, label, kind, a, names)
   endif
 endfunction
 
-## The arguments as a row of finite real scalars.
-function x = scalars (fn, label, a, names)
+## The arguments as a row of finite real scalars.  ROLE per argument: 1 a
+## time, 0 a value of the input, 2 a difference of values of the input;
+## texts "VALUE UNIT" are converted accordingly.
+function x = scalars (fn, label, a, names, quantity, role)
   x = zeros (1, numel (a));
   for i = 1:numel (a)
     v = a{i};
+    if (ischar (v))
+      if (role(i) == 1)
+        si = "s";
+      else
+        si = units_of ([], quantity(find (quantity == ".", 1) + 1:end));
+      endif
+      v = units_value (fn, label, names{i}, v, si, role(i) == 2);
+    endif
     if (! ((isnumeric (v) || islogical (v)) && isreal (v) && isscalar (v)
            && isfinite (v)))
       build_error (fn, label, "%s must be a finite real scalar, got %s",
@@ -181,6 +197,17 @@ endfunction
 %! assert (u.hold, true);
 %! assert (u.t, [0; 10; 10; 20]);
 
+%!test
+%! u = vn_signal ("F1.flow", "step", "10 min", "36 m3/h", "72 m3/h");
+%! assert (u.t, [600; 600]);
+%! assert (u.v, [0.01; 0.02], 1e-15);
+%! u = vn_signal ("H1.duty", "ramp", 0, "1 h", "0 kW", "2 kW");
+%! assert ([u.t, u.v], [0 0; 3600 2000]);
+%! u = vn_signal ("LV1.opening", "pulse", "30 s", "2 min", "40 %", "10 %");
+%! assert ([u.t, u.v], [30 0.4; 30 0.5; 150 0.5; 150 0.4], 1e-15);
+%!error <vn_signal: signal "F1.flow": AFTER "2 m": "m" is a unit of length; AFTER allows units of flow: m3/s> vn_signal ("F1.flow", "step", 1, 0, "2 m")
+%!error <vn_signal: signal "F1.flow": T0 "1 m3/h": "m3/h" is a unit of flow; T0 allows units of time: s, min, h, d> vn_signal ("F1.flow", "step", "1 m3/h", 0, 1)
+%!error <vn_signal: signal "T1.chlorine": BEFORE must be a number here> vn_signal ("T1.chlorine", "step", 1, "1 mg/L", 1)
 %!error <Invalid call> vn_signal ("F1.flow", "step")
 %!error <vn_signal: QUANTITY must be "UNIT.VARIABLE".*got "F1flow"> vn_signal ("F1flow", "step", 1, 2, 3)
 %!error <vn_signal: QUANTITY must be "UNIT.VARIABLE".*got "F1.flow.x"> vn_signal ("F1.flow.x", "step", 1, 2, 3)

@@ -27,6 +27,10 @@ function net = vn_switch (net, name, varargin)
   loop_check_net (net, name, fn);
   o = loop_options (varargin, {"measure", "manipulate", "on", "off", "values"},
                     fn, name, "switch", {"measure", "manipulate", "on", "off"});
+  if (ischar (o.on) || ischar (o.off))
+    loop_refs (net, name, o, fn);
+    o = loop_units (net, name, o, fn, "switch");
+  endif
   par.on = loop_scalar (o.on, "on", name, fn, false);
   par.off = loop_scalar (o.off, "off", name, fn, false);
   if (par.on == par.off)

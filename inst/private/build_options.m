@@ -27,6 +27,14 @@
 ##
 ## Numeric scalars go to @var{par}, choices to @var{aux} (the string) and
 ## @var{par} (the code); @var{given} holds every value as given.
+##
+## A numeric option (real, positive, nonneg, rim, fraction, cd, above1,
+## vector) may be given as a text "VALUE UNIT" ("36 m3/h", "2400 mm",
+## "50 %"): it is converted by @code{units_value} to the option's unit of
+## measure (the schema's), whose dimension the unit must share; an empty
+## unit of measure means a fraction (1 or %), and "kv" is a valve
+## coefficient (Kv or Cv).  The value converted is what is checked and
+## stored.
 ## @end deftypefn
 
 function [par, aux, given] = build_options (fn, label, args, spec)
@@ -54,6 +62,26 @@ function [par, aux, given] = build_options (fn, label, args, spec)
       build_error (fn, label, "option %s is given twice", upper (key));
     endif
     v = args{i+1};
+    shown = build_value_str (v);
+    if (ischar (v) && any (strcmp (spec{k,2}, {"real", "positive", "nonneg", ...
+                                               "rim", "fraction", "cd", ...
+                                               "above1", "vector"})))
+      if (strcmp (key, "kv"))
+        si = "Kv";
+      elseif (isempty (spec{k,3}))
+        si = "1";
+      else
+        si = spec{k,3};
+      endif
+      [~, ~, ok] = units_text (v);
+      if (ok)
+        v = units_value (fn, label, key, v, si);
+        shown = sprintf ("%s (%.6g%s)", shown, v, with_space (spec{k,3}));
+      else
+        shown = sprintf ("%s (give a number, or a text \"VALUE UNIT\" in %s)",
+                         shown, units_allowed (si));
+      endif
+    endif
     [ok, what] = check_value (v, spec{k,2}, spec{k,4});
     if (! ok)
       uom = spec{k,3};
@@ -61,7 +89,7 @@ function [par, aux, given] = build_options (fn, label, args, spec)
         uom = [" (" uom ")"];
       endif
       build_error (fn, label, "%s must be %s%s, got %s",
-                   upper (key), what, uom, build_value_str (v));
+                   upper (key), what, uom, shown);
     endif
     switch (spec{k,2})
       case {"ref", "matrix", "names", "cell"}
@@ -80,6 +108,12 @@ function [par, aux, given] = build_options (fn, label, args, spec)
         par.(key) = double (v);
     endswitch
   endfor
+endfunction
+
+function u = with_space (u)
+  if (! isempty (u))
+    u = [" " u];
+  endif
 endfunction
 
 ## Check one value against its type; WHAT says what is allowed.

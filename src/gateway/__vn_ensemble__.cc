@@ -4,10 +4,31 @@
 // nt x ny x nrun (ny: opts.record, or every output); status 0 or the
 // core's VN_E* code per run, msgs the failed runs' messages; steps the
 // integrator steps per run; wall the seconds of the whole ensemble.
-// opts: reltol, abstol, solver, maxsteps, maxstep, record, workers.
+// opts: reltol, abstol, solver, maxsteps, maxstep, record, workers, and
+// jobfile: when given, the job is written there (src/core/vn_jobfile.h)
+// for the MPI program instead of being run, and nothing is returned.
+// [Y, status, msgs, steps, wall] = __vn_ensemble__ ("read", resultfile)
+// reads the results that program wrote.
 #include <chrono>
 #include "vn_gateway.h"
 #include "vn_ens.h"
+#include "vn_jobfile.h"
+
+// The outputs of a gateway call from per-run arrays.
+static octave_value_list
+ens_outputs (NDArray &Y, long nrun, const int *status, const long *steps,
+             const char *msgs, size_t msglen, double wall)
+{
+  ColumnVector stv (nrun), sv (nrun);
+  Cell mc (nrun, 1);
+  for (long r = 0; r < nrun; r++)
+    {
+      stv(r) = status[r];
+      sv(r) = steps[r];
+      mc(r) = std::string (status[r] ? msgs + msglen * r : "");
+    }
+  return ovl (Y, stv, mc, sv, wall);
+}
 
 static const char *FN = "vn_ensemble";
 
@@ -18,6 +39,22 @@ DEFUN_DLD (__vn_ensemble__, args, ,
            "@var{pidx}, @var{P})\nInternal: many runs of a packed network "
            "on several threads.\n@end deftypefn")
 {
+  if (args.length () == 2 && args(0).is_string ()
+      && args(0).string_value () == "read")
+    {
+      std::string file = args(1).xstring_value ("%s: result file name "
+                                                "must be a string", FN);
+      vn_res r;
+      char err[1024];
+      if (vn_res_read (file.c_str (), &r, err, sizeof err) != VN_OK)
+        error_with_id ("vesselnet:core", "%s: %s", FN, err);
+      NDArray Y (dim_vector (r.nt, r.ny, r.nrun));
+      std::copy (r.Y, r.Y + (size_t) r.nt * r.ny * r.nrun, Y.fortran_vec ());
+      octave_value_list out = ens_outputs (Y, r.nrun, r.status, r.steps,
+                                           r.msg, r.msglen, r.wall);
+      vn_res_free (&r);
+      return out;
+    }
   if (args.length () != 7)
     print_usage ();
   ColumnVector tout = args(2).xcolumn_vector_value ("%s: TOUT must be a "
@@ -103,6 +140,17 @@ DEFUN_DLD (__vn_ensemble__, args, ,
   job.sim.yrec = rec.empty () ? NULL : rec.data ();
   job.workers = o.contents ("workers").int_value ();
   job.stop = vn_gw_stop;
+  if (o.isfield ("jobfile"))
+    {
+      std::string file = o.contents ("jobfile").xstring_value ("%s: job "
+                                                               "file name "
+                                                               "must be a "
+                                                               "string", FN);
+      char err[1024];
+      if (vn_job_write (file.c_str (), &job, err, sizeof err) != VN_OK)
+        error_with_id ("vesselnet:core", "%s: %s", FN, err);
+      return ovl ();
+    }
   NDArray Y (dim_vector (nt, ny, nrun));
   std::vector<int> status (nrun > 0 ? nrun : 1);
   const size_t msglen = 512;
@@ -127,13 +175,6 @@ DEFUN_DLD (__vn_ensemble__, args, ,
   if (st)
     error_with_id (st == VN_EARG ? "Octave:invalid-input-arg"
                    : "vesselnet:core", "%s: %s", FN, err);
-  ColumnVector stv (nrun), sv (nrun);
-  Cell mc (nrun, 1);
-  for (long r = 0; r < nrun; r++)
-    {
-      stv(r) = status[r];
-      sv(r) = steps[r];
-      mc(r) = std::string (status[r] ? msgs.data () + msglen * r : "");
-    }
-  return ovl (Y, stv, mc, sv, wall);
+  return ens_outputs (Y, nrun, status.data (), steps.data (), msgs.data (),
+                      msglen, wall);
 }
