@@ -27,7 +27,8 @@
 ## Environment: VN_PROP_CASES (cases per property, default 200; make
 ## stress runs 3000), VN_PROP_SEED (run only that seed: the reproducer a
 ## failure report prints), VN_PROP_SKIP (comma-separated classes left out,
-## see prop_classes).  Each block prints its counts.
+## see the classes of prop_case), VN_PROP_VERBOSE (print every failure,
+## not the first 15).  Each block prints its counts.
 ##
 ## Run from the top of the checkout:
 ##   octave-cli --eval 'addpath inst; addpath build/oct; test ("tests/octave/test_properties.m")'
@@ -376,7 +377,11 @@
 %!  endif
 %!  printf ("test_properties: %s: %d cases, %d properties checked, %d failed%s\n",
 %!          name, ncase, nprop, numel (fails), extra);
-%!  for i = 1:min (numel (fails), 15)
+%!  nshow = 15;
+%!  if (! isempty (getenv ("VN_PROP_VERBOSE")))
+%!    nshow = Inf;
+%!  endif
+%!  for i = 1:min (numel (fails), nshow)
 %!    printf ("  %s\n", fails{i});
 %!  endfor
 %!endfunction
