@@ -725,7 +725,17 @@
 %!       Bfd(:,j) = (fp - fm) / (2 * h);
 %!       Dfd(:,j) = (yp(double (yout) + 1) - ym(double (yout) + 1)) / (2 * h);
 %!     endfor
-%!     M = {A, Afd, "A"; B, Bfd, "B"; C, Cfd, "C"; D, Dfd, "D"};
+%!     ## a dry tank (volume 0) sits on the kink of its level law, level ~
+%!     ## V^(1/3) for a cone: no derivative there to compare, and its
+%!     ## temperature and concentrations are undefined; its columns go
+%!     dry = false (1, nx);
+%!     for j = find (cellfun (@(s) endswith (s, ".volume"), names(:).'))
+%!       if (abs (x(j)) <= 1e-12 * max (abs (x)))
+%!         u = names{j}(1:end-7);
+%!         dry |= strncmp (names(:).', [u "."], numel (u) + 1);
+%!       endif
+%!     endfor
+%!     M = {A(:,! dry), Afd(:,! dry), "A"; B, Bfd, "B"; C(:,! dry), Cfd(:,! dry), "C"; D, Dfd, "D"};
 %!     for m = 1:rows (M)
 %!       an = M{m,1};
 %!       fd = M{m,2};
@@ -739,7 +749,13 @@
 %!       bad = abs (an - fd) > 1e-5 * abs (an) + 1e-6 * cs;
 %!       if (any (bad(:)))
 %!         [r, cc] = find (bad, 1);
-%!         fails = add_fail (fails, c, "P5 Jacobian", sprintf ("%s(%d,%d) is %.8g, differences give %.8g (state %d of 2)", M{m,3}, r, cc, an(r,cc), fd(r,cc), k));
+%!         if (any (M{m,3} == "AC"))
+%!           kept = find (! dry);
+%!           col = names{kept(cc)};
+%!         else
+%!           col = c.inputs{cc};
+%!         endif
+%!         fails = add_fail (fails, c, "P5 Jacobian", sprintf ("%s(%d,%s) is %.8g, differences give %.8g (state %d of 2)", M{m,3}, r, col, an(r,cc), fd(r,cc), k));
 %!       endif
 %!     endfor
 %!   endfor
