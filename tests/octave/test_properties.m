@@ -552,6 +552,19 @@
 %! report ("P2 closed networks conserve volume, energy, species", ncase, nprop, fails);
 %! assert (numel (fails), 0);
 
+## An operating point on a kink (a controller at its limit, a level at a
+## nozzle): the forward and backward quotients differ, and the gain holds
+## on one side only (a one-sided derivative, as for a clipped input).
+%!function yes = at_kink (g, opp, op, opm, name, h, tol)
+%!  yes = false;
+%!  if (isempty (opp) || isempty (opm))
+%!    return;
+%!  endif
+%!  fwd = (op_value (opp, name) - op_value (op, name)) / h;
+%!  bwd = (op_value (op, name) - op_value (opm, name)) / h;
+%!  yes = abs (fwd - bwd) > 100 * tol && min (abs (g - [fwd, bwd])) <= 1e-2 * abs (g) + tol;
+%!endfunction
+
 ## ---- P3: finite gains equal difference quotients of operating points --
 %!test
 %! n = prop_count (200);
@@ -561,7 +574,7 @@
 %! nprop = 0;
 %! nosteady = 0;
 %! for seed = prop_seeds (n, 200000)
-%!   c = prop_case (seed, pick ({"open", "open", "loop", "thermal"}));
+%!   c = prop_case (seed, {"open", "loop", "open", "thermal"}{1 + mod(seed, 4)});
 %!   if (skipped (c, skip) || isempty (c.inputs))
 %!     continue;
 %!   endif
@@ -609,7 +622,7 @@
 %!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %g but operating points give %.6g", c.outputs{i}, c.inputs{j}, g, fd));
 %!       elseif (isfinite (g) && ! isfinite (fd))
 %!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %.6g but no operating point at %s %.6g +- %.3g (%s / %s)", c.outputs{i}, c.inputs{j}, g, c.inputs{j}, u0, h, whyp, whym));
-%!       elseif (isfinite (g) && abs (g - fd) > tol)
+%!       elseif (isfinite (g) && abs (g - fd) > tol && ! at_kink (g, opp, op, opm, c.outputs{i}, h, tol))
 %!         fails = add_fail (fails, c, "P3 gain", sprintf ("gain %s/%s is %.6g, operating points give %.6g", c.outputs{i}, c.inputs{j}, g, fd));
 %!       endif
 %!     endfor
@@ -627,7 +640,7 @@
 %! ncase = 0;
 %! nprop = 0;
 %! for seed = prop_seeds (n, 300000)
-%!   c = prop_case (seed, pick ({"open", "open", "loop", "thermal"}));
+%!   c = prop_case (seed, {"open", "loop", "open", "thermal"}{1 + mod(seed, 4)});
 %!   if (skipped (c, skip) || isempty (c.inputs))
 %!     continue;
 %!   endif
@@ -823,9 +836,6 @@
 %!   H = logu (0.1, 20);
 %!   [g, top] = tank_geometry (A, H, {shape});
 %!   c = struct ("seed", seed, "family", "drain", "classes", {{"drain", shape}});
-%!   if (A < 1e-3)
-%!     c.classes{end+1} = "small";
-%!   endif
 %!   if (skipped (c, skip))
 %!     continue;
 %!   endif
@@ -860,6 +870,15 @@
 %!     continue;
 %!   end_try_catch
 %!   hend = res.T1.level(end);
+%!   if (res.T1.volume(1) < 1e-2)
+%!     ## a small vessel: its integrator tolerance is its own (class small)
+%!     c.classes{end+1} = "small";
+%!     if (skipped (c, skip))
+%!       ncase--;
+%!       nprop--;
+%!       continue;
+%!     endif
+%!   endif
 %!   ## the level error at t1 as a time error: dh / |dh/dt|
 %!   rate = k * sqrt (h1) / drain_area (shape, gs, h1);
 %!   terr = abs (hend - h1) / rate;
