@@ -635,10 +635,17 @@ static int diagnose (ss *S, int st, double tsim)
                       strncmp (why, "steady: ", 8) ? why : why + 8);
     }
   if (where >= S->nx)
-    return vn_fail (net, VN_ENOSTEADY, "the targets cannot be met with the "
-                    "adjusted inputs: target %d is missed by %g (the "
-                    "inputs may be at their limits)", where - S->nx + 1,
-                    S->F[where]);
+    {
+      int k = where - S->nx, yi = S->o->ytgt[k];
+      const vn_unit *u = &net->u[vn_output_unit (net, yi)];
+      int o = yi - u->yoff;
+      return vn_fail (net, VN_ENOSTEADY, "the targets cannot be met with "
+                      "the adjusted inputs: target %d, %s.%s = %g (%s), is "
+                      "missed by %g (the inputs may be at their limits)",
+                      k + 1, u->name, o < u->k->nout ? u->k->out[o] : "?",
+                      S->o->target[k],
+                      o < u->k->nout ? u->k->ounit[o] : "", S->F[where]);
+    }
   return st;
 }
 

@@ -151,3 +151,6 @@
 
 ## ---- a tank that fills is named, not its source ----------------------
 %!error <vn_steady: tank "T2" has no outlet: liquid fed to tank "T1" flows on into it> vn_steady (vn_orifice (vn_tank (vn_tank (vn_feed (vn_tank (vn_network ("f"), "T1", "area", 1, "level", 1), "F1", "T1", "flow", 0.01), "T2", "area", 1), "T3", "area", 1), "O1", "T1", "T2", "coeff", 0.01))
+
+## ---- a missed target names its quantity ------------------------------
+%!error <vn_steady: the targets cannot be met with the adjusted inputs: target 1, T1.level = 5 \(m\), is missed by -4> vn_steady (vn_orifice (vn_feed (vn_tank (vn_network ("m"), "T1", "area", 2, "level", 1, "rim", 2), "F1", "T1", "flow", 0.01), "O1", "T1", "", "coeff", 0.01), "target", {"T1.level", 5}, "adjust", {"F1.flow"})
