@@ -207,3 +207,11 @@ steady_bench (ran);
 ## 3. Fitting three coefficients to two step tests (bench/fit_bench.m)
 printf ("\n3. Fit: vn_fit against fminsearch over ode15s (same model, same data)\n\n");
 run (fullfile (fileparts (mfilename ("fullpath")), "fit_bench.m"));
+
+## 4. The cost of sensor parameters in a fit (bench/fit_sensor_bench.m)
+printf ("\n4. Fit with a transmitter's offset and scale, as a ratio to the same fit without\n\n");
+run (fullfile (fileparts (mfilename ("fullpath")), "fit_sensor_bench.m"));
+
+## 5-9. Speed from Octave: call against core, ensembles, large chains,
+## builders, fit with and without the compiled-network cache
+run (fullfile (fileparts (mfilename ("fullpath")), "speed_bench.m"));

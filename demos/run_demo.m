@@ -153,3 +153,12 @@ try
 catch err
   printf ("fit_and_tune failed: %s\n", err.message);
 end_try_catch
+
+## ---- a plant record: read, fitted, validated, tuned (plant_record.m) ----
+if (demo_have ("vn_readlog") && demo_have ("vn_validate"))
+  try
+    plant_record (demo_outdir (fullfile (here, "output")));
+  catch err
+    printf ("plant_record failed: %s\n", err.message);
+  end_try_catch
+endif

@@ -9,39 +9,74 @@
 ##
 ## @example
 ## ex = vn_experiment (t, "F1.flow", u, "T2.level", y)
+## ex = vn_experiment (log.t, "F1.flow", log.FT101, "T2.level", log.LT101, ...
+##                     "span", @{"T2.level", [0 3]@}, "range", @{"T2.level", [0 3]@})
 ## @end example
 ##
 ## Whether a quantity is an input that drove the test (@qcode{"F1.flow"},
 ## @qcode{"LV1.opening"}) or a measured output (@qcode{"T2.level"},
 ## @qcode{"O1.flow"}) is decided by @code{vn_fit} against the network: an
 ## input parameter of its unit is an input, anything else must be an
-## output of its unit.  Measured outputs may hold NaN (gaps, dropped
-## samples); inputs may not, and neither may @var{t}.
+## output of its unit.  NaN readings (gaps, @qcode{"Bad"} entries of a
+## historian export) take no part in a fit.  A NaN in an input is filled
+## from its neighbours by the input's intersample rule (below) and counted
+## in the fit's report.  @var{t} may hold no NaN.
 ##
 ## Options:
 ## @table @asis
+## @item @qcode{"span"}
+## @code{@{QUANTITY, [LOW HIGH], @dots{}@}}: the data of QUANTITY are
+## fractions (0..1) of a transmitter span from LOW to HIGH in SI units
+## (e.g. @code{@{"T2.level", [0 3]@}} for a level transmitter of 0..3 m
+## whose readings are 0..100 %, read as 0..1); they are converted to
+## LOW + fraction * (HIGH - LOW).
+## @item @qcode{"range"}
+## @code{@{QUANTITY, [LOW HIGH], @dots{}@}}: the limits a sensor can read
+## (SI units, after any span).  Readings at or past a limit (within 1e-9 of
+## the range) are censored: they stay in @code{ex.data} and are marked in
+## @code{ex.censored} and on plots, but take no part in a fit, since a
+## saturated transmitter says only that the value lies beyond its limit.
+## Use -Inf or Inf for a side without a limit.  Only measured outputs may
+## be censored.
+## @item @qcode{"hold"}
+## how inputs vary between samples: @qcode{"auto"} (default), @code{true}
+## (each input holds its value until the next sample) or @code{false}
+## (inputs vary linearly between samples).  @qcode{"auto"} decides per
+## input: it is held when its sample-to-sample changes are isolated, that
+## is when no two consecutive changes go the same way (a step test, or a
+## bump or pulse test, whose value jumps and then stays; a one-sample pulse
+## goes up and then down), and interpolated linearly otherwise (a ramp, or
+## a measured, noisy signal, moves the same way at consecutive samples).
+## Changes below 1e-9 of the input's largest magnitude do not count; a
+## constant input is held.  @code{vn_fit} reports the rule each input
+## used.
 ## @item @qcode{"sigma"}
 ## standard deviation of the measurement noise, one per measured output in
 ## the order given (a scalar applies to all); residuals are divided by it.
 ## @item @qcode{"weights"}
 ## instead of @qcode{"sigma"}: a weight per output (weight = 1/sigma^2).
-## @item @qcode{"hold"}
-## @code{true}: each input holds its value until the next sample (a stepped
-## input); @code{false} (default): inputs vary linearly between samples.
 ## @item @qcode{"start"}
 ## the state the test starts from: @qcode{"steady"} (default; the model's
 ## steady state at the first input values), @qcode{"measured"} (tank levels
-## from the first measured level of each tank, other tanks as declared) or
-## @qcode{"declared"} (the levels declared on the network).
+## from the first measured level of each tank, other tanks as declared; a
+## tank whose first reading is NaN or censored starts as declared) or
+## @qcode{"declared"} (the levels declared on the network; fit them as
+## unknown starting levels with @code{vn_fit}).
 ## @item @qcode{"name"}
 ## a label for plots and reports.
 ## @end table
 ##
 ## The result has fields @code{t} (column), @code{names} (cellstr),
-## @code{data} (times x names), @code{sigma}, @code{weights}, @code{hold},
+## @code{data} (times x names, SI), @code{censored} (logical, times x
+## names), @code{span} and @code{range} (names x 2, NaN and [-Inf Inf]
+## where none is given), @code{sigma}, @code{weights}, @code{hold},
 ## @code{start} and @code{name}.  Several tests form a struct array
 ## @code{[ex1, ex2]}.
-## @seealso{vn_fit, vn_fopdt, vn_plot}
+##
+## A test recorded on a plant describes the plant only as well as its
+## instruments: check transmitter ranges and zero errors before a fitted
+## model is used to judge a plant or tune a live loop.
+## @seealso{vn_fit, vn_validate, vn_fopdt, vn_plot}
 ## @end deftypefn
 
 function ex = vn_experiment (t, varargin)
@@ -63,8 +98,11 @@ function ex = vn_experiment (t, varargin)
            "vn_experiment: T must hold two or more strictly increasing times");
   endif
   nt = numel (t);
-  ex = struct ("t", t, "names", {{}}, "data", zeros (nt, 0), "sigma", [],
-               "weights", [], "hold", false, "start", "steady", "name", "");
+  ex = struct ("t", t, "names", {{}}, "data", zeros (nt, 0),
+               "censored", false (nt, 0), "span", zeros (0, 2),
+               "range", zeros (0, 2), "sigma", [], "weights", [],
+               "hold", "auto", "start", "steady", "name", "");
+  pending = struct ("span", {{}}, "range", {{}});
   args = varargin;
   if (mod (numel (args), 2) != 0)
     error ("Octave:invalid-input-arg",
@@ -81,12 +119,73 @@ function ex = vn_experiment (t, varargin)
     if (any (name == "."))
       ex = add_quantity (ex, name, val);
     else
-      ex = set_option (ex, name, val);
+      [ex, pending] = set_option (ex, pending, name, val);
     endif
   endfor
   if (isempty (ex.names))
     error ("Octave:invalid-input-arg",
            "vn_experiment: no quantity given; name the inputs and outputs, e.g. vn_experiment (t, \"F1.flow\", u, \"T2.level\", y)");
+  endif
+  nq = numel (ex.names);
+  ex.span = NaN (nq, 2);
+  ex.range = repmat ([-Inf, Inf], nq, 1);
+  ## spans first: a range is given in engineering units
+  for i = 1:2:numel (pending.span)
+    j = column (ex, pending.span{i}, "span");
+    lh = pending.span{i+1};
+    ex.span(j, :) = lh;
+    ex.data(:, j) = lh(1) + ex.data(:, j) * (lh(2) - lh(1));
+  endfor
+  ex.censored = false (nt, nq);
+  for i = 1:2:numel (pending.range)
+    j = column (ex, pending.range{i}, "range");
+    lh = pending.range{i+1};
+    ex.range(j, :) = lh;
+    fin = abs (lh(isfinite (lh)));
+    tol = 1e-9 * max ([fin, diff(lh)(isfinite (diff (lh))), realmin]);
+    y = ex.data(:, j);
+    ex.censored(:, j) = ! isnan (y) & (y <= lh(1) + tol | y >= lh(2) - tol);
+  endfor
+endfunction
+
+## Column of a quantity named by a "span" or "range" option.
+function j = column (ex, name, opt)
+  j = find (strcmp (ex.names, name), 1);
+  if (isempty (j))
+    error ("Octave:invalid-input-arg",
+           "vn_experiment: option \"%s\" names \"%s\", which the test does not record; recorded: %s",
+           opt, name, strjoin (ex.names, ", "));
+  endif
+endfunction
+
+## Check a {QUANTITY, [LOW HIGH], ...} list of "span" or "range".
+function c = limits_list (val, opt)
+  ok = iscell (val) && ! isempty (val) && mod (numel (val), 2) == 0;
+  if (ok)
+    c = val(:).';
+    for i = 1:2:numel (c)
+      lh = c{i+1};
+      ok = (ok && ischar (c{i}) && any (c{i} == ".") && isnumeric (lh)
+            && isreal (lh) && numel (lh) == 2 && ! any (isnan (lh)));
+      if (ok)
+        lh = double (lh(:).');
+        ok = lh(1) < lh(2);
+        if (strcmp (opt, "span"))
+          ok = ok && all (isfinite (lh));
+        endif
+        c{i+1} = lh;
+      endif
+    endfor
+  endif
+  if (! ok)
+    if (strcmp (opt, "span"))
+      what = "finite LOW < HIGH";
+    else
+      what = "LOW < HIGH (-Inf or Inf for no limit)";
+    endif
+    error ("Octave:invalid-input-arg",
+           "vn_experiment: option \"%s\" must be {QUANTITY, [LOW HIGH], ...} with %s, e.g. {\"T2.level\", [0 3]}",
+           opt, what);
   endif
 endfunction
 
@@ -119,8 +218,11 @@ function ex = add_quantity (ex, name, val)
   ex.data(:, end+1) = double (val(:));
 endfunction
 
-function ex = set_option (ex, name, val)
+function [ex, pending] = set_option (ex, pending, name, val)
   switch (lower (name))
+    case {"span", "range"}
+      c = limits_list (val, lower (name));
+      pending.(lower (name)) = [pending.(lower (name)), c];
     case {"sigma", "weights"}
       if (! (isnumeric (val) && isreal (val) && isvector (val)
              && all (val > 0) && all (isfinite (val))))
@@ -134,11 +236,15 @@ function ex = set_option (ex, name, val)
                "vn_experiment: give either \"sigma\" or \"weights\", not both");
       endif
     case "hold"
-      if (! (isscalar (val) && (islogical (val) || isnumeric (val))))
+      if (ischar (val) && strcmpi (val, "auto"))
+        ex.hold = "auto";
+      elseif (isscalar (val) && (islogical (val) || isnumeric (val))
+              && any (val == [0 1]))
+        ex.hold = logical (val);
+      else
         error ("Octave:invalid-input-arg",
-               "vn_experiment: option \"hold\" must be true or false");
+               "vn_experiment: option \"hold\" must be \"auto\", true or false");
       endif
-      ex.hold = logical (val);
     case "start"
       allowed = {"steady", "measured", "declared"};
       if (! (ischar (val) && any (strcmpi (allowed, val))))
@@ -155,7 +261,7 @@ function ex = set_option (ex, name, val)
       ex.name = val;
     otherwise
       error ("Octave:invalid-input-arg",
-             "vn_experiment: unknown option \"%s\"; allowed: sigma, weights, hold, start, name, or a quantity \"UNIT.VARIABLE\"",
+             "vn_experiment: unknown option \"%s\"; allowed: span, range, hold, sigma, weights, start, name, or a quantity \"UNIT.VARIABLE\"",
              name);
   endswitch
 endfunction
@@ -191,8 +297,9 @@ endfunction
 %! assert (ex.data(3, 2), 1.1, 1e-12);
 %! assert (isnan (ex.data(2, 2)));
 %! assert (ex.sigma, 0.005);
-%! assert (ex.hold, false);
+%! assert (ex.hold, "auto");
 %! assert (ex.start, "steady");
+%! assert (ex.censored, false (11, 2));
 %! assert (ex.name, "step 1");
 
 %!test
@@ -238,7 +345,35 @@ endfunction
 %!error <data of "T1.level" must be a real vector> vn_experiment (0:2, "T1.level", {1, 2, 3})
 %!error <"T1.level" holds Inf> vn_experiment (0:2, "T1.level", [1 Inf 3])
 %!error <option "sigma" must be positive finite> vn_experiment (0:2, "T1.level", 1:3, "sigma", -1)
-%!error <option "hold" must be true or false> vn_experiment (0:2, "T1.level", 1:3, "hold", "yes")
+%!error <option "hold" must be "auto", true or false> vn_experiment (0:2, "T1.level", 1:3, "hold", "yes")
+%!error <option "hold" must be "auto", true or false> vn_experiment (0:2, "T1.level", 1:3, "hold", 2)
 %!error <option "name" must be a string> vn_experiment (0:2, "T1.level", 1:3, "name", 7)
 %!error <name/value pairs> vn_experiment (0:2, "T1.level", 1:3, "hold")
 %!error <argument 4 must be a quantity> vn_experiment (0:2, "T1.level", 1:3, 5, 1)
+
+%!test
+%! ## span: fractions of a 0..3 m transmitter become metres; range: the
+%! ## readings at 3 m (a transmitter stuck at 100 %) and past 0 m are
+%! ## censored but kept; options may come before the quantities
+%! f = [0.10 0.50 0.99 1.00 1.00 NaN 0 -0.01];
+%! ex = vn_experiment (0:7, "range", {"T2.level", [0 3]}, "F1.flow",
+%!                     ones (1, 8), "T2.level", f, "span", {"T2.level", [0 3]});
+%! assert (ex.data(:, 2).', [0.3 1.5 2.97 3 3 NaN 0 -0.03], 1e-12);
+%! assert (ex.censored(:, 2).', logical ([0 0 0 1 1 0 1 1]));
+%! assert (! any (ex.censored(:, 1)));
+%! assert (ex.span, [NaN NaN; 0 3]);
+%! assert (ex.range, [-Inf Inf; 0 3]);
+
+%!test
+%! ## a one-sided range, a span with an offset zero, two quantities
+%! ex = vn_experiment (0:3, "T1.level", [0.2 0.4 0.6 0.8], "T2.level",
+%!                     [1 2 5 9], "span", {"T1.level", [0.5 2.5]},
+%!                     "range", {"T2.level", [-Inf 5], "T1.level", [1 Inf]});
+%! assert (ex.data(:, 1).', [0.9 1.3 1.7 2.1], 1e-12);
+%! assert (ex.censored.', logical ([1 0 0 0; 0 0 1 1]));
+
+%!error <option "span" names "T3.level", which the test does not record> vn_experiment (0:2, "T1.level", 1:3, "span", {"T3.level", [0 1]})
+%!error <option "span" must be \{QUANTITY, \[LOW HIGH\], ...\} with finite LOW < HIGH> vn_experiment (0:2, "T1.level", 1:3, "span", {"T1.level", [3 0]})
+%!error <option "span" must be> vn_experiment (0:2, "T1.level", 1:3, "span", {"T1.level", [0 Inf]})
+%!error <option "range" must be \{QUANTITY, \[LOW HIGH\], ...\} with LOW < HIGH> vn_experiment (0:2, "T1.level", 1:3, "range", {"T1.level"})
+%!error <option "range" must be> vn_experiment (0:2, "T1.level", 1:3, "range", [0 3])

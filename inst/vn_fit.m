@@ -1,50 +1,112 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{est} =} vn_fit (@var{net}, @var{ex}, @var{params})
 ## @deftypefnx {} {@var{est} =} vn_fit (@dots{}, @var{option}, @var{value}, @dots{})
-## Fit unit parameters of a network to plant tests by least squares.
+## Fit unit parameters of a network, and the sensors that measured the
+## tests, to plant tests by least squares.
 ##
 ## @var{ex} is one test from @code{vn_experiment} or several
-## @code{[ex1, ex2]}, fitted together.  @var{params} names the parameters,
-## @qcode{"UNIT.PARAM"}: any numeric parameter of a unit (orifice
-## @qcode{"coeff"}, tank @qcode{"area"} or @qcode{"diameter"}, valve
-## @qcode{"kv"}, resistance @qcode{"r"}, pump @qcode{"shutoff"} and
-## @qcode{"k"}, valve @qcode{"lag"}, tank @qcode{"ua"}, ...).  Their
-## values on @var{net} are the starting values; they must be positive.
+## @code{[ex1, ex2]}, fitted together.  @var{params} names what is fitted:
+## @table @asis
+## @item @qcode{"UNIT.PARAM"}
+## any numeric parameter of a unit (orifice @qcode{"coeff"}, tank
+## @qcode{"area"}, @qcode{"diameter"} or @qcode{"rim"}, valve @qcode{"kv"},
+## resistance @qcode{"r"}, pump @qcode{"shutoff"} and @qcode{"k"}, valve
+## @qcode{"lag"}, tank @qcode{"ua"}, ...), shared by all tests.  Its value
+## on @var{net} is the start.  A tank's @qcode{"level"} is the level the
+## tests start from when they start from declared levels
+## (@code{vn_experiment (..., "start", "declared")}): an unknown starting
+## level.
+## @item @qcode{"UNIT.PARAM@@K"}
+## the same for test K alone (K its number in @var{ex} or its name), e.g.
+## @qcode{"T1.level@@1"}, @qcode{"T1.level@@2"}: each test its own
+## unknown starting level.
+## @item @qcode{"QUANTITY:offset"}, @qcode{"QUANTITY:scale"}
+## the transmitter measuring QUANTITY, shared by every test that measures
+## it: measured = scale * model + offset (a zero error and a span error).
+## They start at 0 and 1.
+## @end table
 ##
 ## Each test is simulated from its start (see @code{vn_experiment}) with
-## its inputs as signals; the fit minimises the sum over all tests and
-## measured outputs of ((measured - predicted) / sigma)^2, NaN samples
-## left out.  The method is Levenberg-Marquardt on the logarithms of the
-## parameters (which keeps them positive) with the exact Jacobian from the
-## core's forward sensitivities (CVODES).
+## its inputs as signals, each input held between samples or interpolated
+## linearly as the test's @qcode{"hold"} says.  The fit minimises the sum
+## over all tests and measured outputs of ((measured - predicted) /
+## sigma)^2; NaN and censored readings (outside a sensor's
+## @qcode{"range"}) are left out.  The method is Levenberg-Marquardt with
+## the exact Jacobian from the core's forward sensitivities (CVODES).
+## Positive physical parameters and sensor scales are fitted as their
+## logarithms, which keeps them positive; starting levels, elevations and
+## sensor offsets as they are.
 ##
-## Options: @qcode{"lower"}, @qcode{"upper"} (bounds, a scalar or one per
-## parameter; default 0 and Inf), @qcode{"maxiter"} (50), @qcode{"tol"}
-## (1e-6, on the relative change of the parameters), @qcode{"reltol"},
-## @qcode{"abstol"} (integrator, 1e-8 and 1e-10), @qcode{"verbose"} (one
-## line per iteration).
+## Robustness: every parameter stays inside the range its unit allows
+## (the schema) and inside the bounds given.  A step changes no logarithm
+## by more than 1 (a factor of e) and no other parameter by more than half
+## its start box (below).  A trial step at which the model cannot be run
+## (a value the network refuses, a solver failure, a residual that is not
+## finite, any error from a command the fit calls) is rejected and the
+## damping raised, as for a step that does not lower the sum of squares;
+## @code{est.rejected} counts them.  Only a model that cannot be run at
+## the start is an error, @qcode{"vn_fit: the model cannot be run at the
+## starting values: ..."} (id @qcode{"vesselnet:fit-not-converged"}).
+##
+## Options:
+## @table @asis
+## @item @qcode{"bounds"}
+## @code{@{NAME, [LOW HIGH], @dots{}@}} or a matrix with a row [LOW HIGH]
+## per parameter (NaN for none): the fit stays inside, and
+## @qcode{"starts"} are spread there.
+## @item @qcode{"lower"}, @qcode{"upper"}
+## bounds as a scalar or one per parameter.
+## @item @qcode{"starts"}
+## N: fit from N starts and keep the best (least sum of squares).  Start 1
+## is the network's values; the other N - 1 form a Latin hypercube in the
+## fit's coordinates (logarithms for positive parameters) within the
+## bounds.  Without @qcode{"bounds"} a parameter's starts lie within a
+## factor of 10 either side of its start (a sensor scale: a factor of 2;
+## a starting level or other linear parameter: from 0 to twice its start;
+## an offset: within 10 % of the largest reading of its quantity either
+## side of zero), inside its allowed range.  A start whose model fails is
+## recorded and skipped.
+## @item @qcode{"maxiter"} (50), @qcode{"tol"} (1e-6, on the change of the
+## fit's coordinates), @qcode{"reltol"}, @qcode{"abstol"} (integrator, 1e-8
+## and 1e-10), @qcode{"verbose"} (one line per iteration).
+## @end table
 ##
 ## The result @var{est} holds @code{names}, @code{value} (column),
 ## @code{stderr}, @code{ci} (one row [low high] per parameter, 95 %, from
-## Student's t with as many degrees of freedom as samples less
-## parameters), @code{corr} (correlation matrix), @code{cov},
-## @code{rmse} (root mean square of the unweighted residuals, all
-## outputs), @code{residuals} (cell, one times x outputs matrix per test,
-## measured - predicted, NaN where no sample), @code{net} (the network
-## with the fitted values), @code{iterations}, @code{reason} (why the
-## iteration stopped) and @code{fit(k)} with @code{t}, @code{names},
-## @code{measured}, @code{predicted}, @code{units} and @code{name} for
-## @code{vn_plot}.  Standard errors scale with the residual variance, so
-## sigmas need only be right relative to each other.
+## Student's t with as many degrees of freedom as readings less
+## parameters), @code{corr} (correlation matrix), @code{cov} (covariance
+## in the fit's coordinates: of the logarithm where @code{scale} says
+## @qcode{"log"}, of the value where it says @qcode{"linear"}),
+## @code{scale} (cellstr, one per parameter), @code{dof}, @code{rmse} (root
+## mean square of the unweighted residuals, all outputs), @code{residuals}
+## (cell, one times x outputs matrix per test, measured - predicted, NaN
+## where no reading was used), @code{net} (the network with the fitted
+## shared values), @code{sensors} (quantity, offset, scale of each fitted
+## sensor), @code{iterations}, @code{reason} (why the iteration stopped, in
+## words, with the parameters at a bound and, with @qcode{"starts"}, how
+## many starts reached the best), @code{rejected}, @code{atbound}
+## (logical per parameter), @code{starts} (per start: @code{theta0},
+## @code{value}, @code{ssr}, @code{reason}, @code{reached}; the
+## @code{best}; the @code{spread} [min max] of the optima found),
+## @code{inputs} (per test and input: the intersample @code{rule},
+## @qcode{"held"} or @qcode{"linear"}, @code{how} it was decided, and the
+## gaps @code{filled}), @code{readings} (per test and output: readings
+## @code{used}, @code{censored}, @code{missing}), @code{censored} (total
+## censored readings) and @code{fit(k)} with @code{t}, @code{names},
+## @code{measured}, @code{predicted} (what the sensor would read),
+## @code{censored}, @code{units} and @code{name} for @code{vn_plot}.
+## Standard errors scale with the residual variance, so sigmas need only be
+## right relative to each other.
 ##
 ## When the data cannot separate the parameters (near-singular
 ## information matrix, or a correlation beyond 0.99) a warning
 ## @qcode{"vesselnet:fit-ill-conditioned"} names them.
 ##
 ## A fitted model describes the tests it was fitted to: validate it on a
-## test it has not seen before using it to judge a plant, and have any
-## tuning based on it reviewed before it reaches a live loop.
-## @seealso{vn_experiment, vn_simulate, vn_plot, vn_fopdt}
+## test it has not seen (@code{vn_validate}) before using it to judge a
+## plant, and have any tuning based on it reviewed before it reaches a live
+## loop.  Local codes govern safety systems.
+## @seealso{vn_experiment, vn_validate, vn_simulate, vn_plot, vn_fopdt}
 ## @end deftypefn
 
 function est = vn_fit (net, ex, params, varargin)
@@ -69,23 +131,23 @@ function est = vn_fit (net, ex, params, varargin)
            "vn_fit: PARAMS must name the parameters to fit, e.g. {\"O1.coeff\", \"T2.area\"}");
   endif
   params = params(:).';
-  np = numel (params);
-  if (numel (unique (params)) < np)
-    error ("Octave:invalid-input-arg",
-           "vn_fit: PARAMS names a parameter twice: %s", strjoin (params, ", "));
-  endif
-  opt = fit_options (varargin, np);
-  [pq, p0] = resolve (net, params);
-  E = fit_classify (net, ex, pq);
+  opt = fit_options (varargin, params);
+  P = fit_params (net, params, ex, opt);
+  isunit = strcmp ({P.type}, "unit");
+  E = fit_classify (net, ex, {P(isunit).q});
+  check_starting_levels (P, E);
   so = struct ("reltol", opt.reltol, "abstol", opt.abstol, "solver", 0,
                "maxsteps", 100000, "maxstep", 0);
 
-  fun = @(th) fit_residuals (net, E, pq, exp (th), so);
-  [th, r, J, info] = fit_lm (fun, log (p0), log (opt.lower), log (opt.upper),
-                             opt);
-  p = exp (th);
-  st = fit_stats (J, r, p, params);
-  [~, ~, pred] = fit_residuals (net, E, pq, p, so);
+  fun = @(th) fit_residuals (net, E, P, th, so);
+  lo = fit_values (P, [P.lo], "inverse");
+  hi = fit_values (P, [P.hi], "inverse");
+  opt.maxstep = [P.maxstep].';
+  th0 = fit_values (P, [P.value], "inverse");
+  [th, r, J, info, starts] = fit_starts (fun, P, th0, lo, hi, opt);
+  [p, dp] = fit_values (P, th);
+  st = fit_stats (J, r, p, dp, params);
+  [~, ~, pred] = fit_residuals (net, E, P, th, so, false);
 
   est.names = params(:);
   est.value = p;
@@ -93,12 +155,13 @@ function est = vn_fit (net, ex, params, varargin)
   est.ci = st.ci;
   est.corr = st.corr;
   est.cov = st.cov;
+  est.scale = {P.space}.';
   est.dof = st.dof;
-  est.jacobian = J ./ p(:).';
+  est.jacobian = J ./ dp(:).';
   res = cell (numel (E), 1);
   all_r = [];
   fit = struct ("t", {}, "names", {}, "measured", {}, "predicted", {},
-                "units", {}, "name", {});
+                "units", {}, "name", {}, "censored", {});
   for k = 1:numel (E)
     res{k} = E(k).y - pred{k};
     all_r = [all_r; res{k}(! isnan (res{k}))];
@@ -108,43 +171,72 @@ function est = vn_fit (net, ex, params, varargin)
     if (isempty (name))
       name = sprintf ("test %d", k);
     endif
-    fit(k) = struct ("t", E(k).t, "names", {E(k).yname}, "measured", E(k).y,
-                     "predicted", pred{k}, "units", {un}, "name", name);
+    fit(k) = struct ("t", E(k).t, "names", {E(k).yname}, "measured",
+                     E(k).ymeas, "predicted", pred{k}, "units", {un},
+                     "name", name, "censored", E(k).cens);
   endfor
   est.rmse = sqrt (mean (all_r .^ 2));
   est.residuals = res;
-  est.net = fit_apply (net, pq, p);
+  shared = isunit & [P.exper] == 0;
+  est.net = fit_apply (net, {P(shared).q}, p(shared));
+  est.sensors = sensor_table (P, p);
   est.iterations = info.iterations;
-  est.reason = info.reason;
+  bound = th <= lo(:) | th >= hi(:);
+  est.atbound = bound;
+  reason = info.reason;
+  if (any (bound))
+    reason = sprintf ("%s; at a bound: %s", reason,
+                      strjoin (params(bound), ", "));
+  endif
+  if (any (st.unseen))
+    reason = sprintf ("%s; not seen by the data (no interval): %s", reason,
+                      strjoin (params(st.unseen), ", "));
+  endif
+  if (opt.starts > 1)
+    reason = sprintf ("%s; best of %d starts (%d reached it, %d failed)",
+                      reason, opt.starts, nnz (starts.reached),
+                      nnz (isnan (starts.ssr)));
+  endif
+  est.reason = reason;
+  est.rejected = info.rejected;
+  est.starts = starts;
+  est.inputs = [E.inputs];
+  est.readings = [E.readings];
+  est.censored = sum ([est.readings.censored]);
   est.fit = fit;
 endfunction
 
-## Fitted parameters and their starting values.
-function [pq, p0] = resolve (net, params)
-  s = vn_schema ();
-  np = numel (params);
-  pq = cell (1, np);
-  p0 = zeros (np, 1);
-  for i = 1:np
-    q = vn_quantity (net, params{i}, "param", "vn_fit");
-    un = net.units(q.unit);
-    if (isfield (un.par, q.var))
-      v = un.par.(q.var);
-    else
-      v = s.(q.kind).defaults(q.slot + 1);
+## The sensor of each quantity with a fitted offset or scale.
+function s = sensor_table (P, p)
+  s = struct ("quantity", {}, "offset", {}, "scale", {});
+  for i = find (! strcmp ({P.type}, "unit"))
+    j = find (strcmp ({s.quantity}, P(i).quantity), 1);
+    if (isempty (j))
+      j = numel (s) + 1;
+      s(j) = struct ("quantity", P(i).quantity, "offset", 0, "scale", 1);
     endif
-    if (! (isscalar (v) && isfinite (v)))
-      error ("Octave:invalid-input-arg",
-             "vn_fit: %s \"%s\" has no value for \"%s\"; give a starting value on the network",
-             q.kind, q.uname, q.var);
+    s(j).(P(i).type) = p(i);
+  endfor
+endfunction
+
+## A starting level (or volume) is fitted only for tests that start from
+## declared or measured levels: at a steady start it has no effect.
+function check_starting_levels (P, E)
+  for i = find (strcmp ({P.type}, "unit"))
+    q = P(i).q;
+    if (strcmp (q.kind, "tank") && any (strcmp (q.var, {"level", "volume"})))
+      ks = 1:numel (E);
+      if (P(i).exper > 0)
+        ks = P(i).exper;
+      endif
+      for k = ks
+        if (strcmp (E(k).start, "steady"))
+          error ("Octave:invalid-input-arg",
+                 "vn_fit: %s is the %s test %d starts from, but that test starts at steady state; give it \"start\", \"declared\" (or \"measured\") in vn_experiment",
+                 P(i).name, q.var, k);
+        endif
+      endfor
     endif
-    if (! (v > 0))
-      error ("Octave:invalid-input-arg",
-             "vn_fit: %s: starting value %g is not positive; vn_fit fits positive parameters (as logarithms)",
-             params{i}, v);
-    endif
-    pq{i} = q;
-    p0(i) = v;
   endfor
 endfunction
 
@@ -296,5 +388,5 @@ endfunction
 %!error <"maxiter" must be a positive integer> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "maxiter", 0.5)
 %!error <"tol" must lie in \(0, 1\)> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "tol", 2)
 %!error <"lower" must be a scalar or 1 bounds> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", [1 2])
-%!error <0 <= lower < upper> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", 1, "upper", 0.5)
+%!error <bounds must satisfy lower < upper> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", 1, "upper", 0.5)
 %!error <"verbose" must be true or false> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "verbose", "yes")

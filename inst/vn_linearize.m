@@ -28,9 +28,12 @@
 ## Inf for an integrator), damping ratios and natural frequencies (rad/s).
 ## Not computed above 2000 states unless asked (see @code{note}).
 ## @item gain
-## steady-state gains, outputs x inputs, @code{D - C A^-1 B}; a signed Inf
-## where an input drives an integrating output (a tank whose outflow does
-## not depend on its level).
+## steady-state gains, outputs x inputs, @code{D - C A^-1 B} on the states
+## the input reaches and that reach the output; a signed Inf where an
+## input drives an integrating output (a tank whose outflow does not
+## depend on its level), the sign of the output's ramp for a rise of the
+## input.  Each finite gain is the derivative of the steady output with
+## respect to the input, as two @code{vn_steady} operating points give.
 ## @item num, den, zeros
 ## for one input and one output: the transfer function's coefficients in
 ## descending powers of s and its zeros; [] otherwise.
@@ -57,6 +60,17 @@
 ## the controller's output), as for tuning that loop.
 ## @end table
 ##
+## An input at a bound of its range (a valve at opening 0 or 1, a pump at
+## speed 0) has the derivative from inside the range in its columns of B
+## and D, the one-sided derivative the clipped law has there (not the 0 of
+## the clip), and @code{note} says so.  Steady-state gains keep only the
+## states the input reaches and that reach the output (found on the
+## non-zero pattern of A, B and C): an idle tank (a catch tank below a
+## rim that does not spill) never makes a gain singular or Inf.
+##
+## An operating point found with switches frozen (@code{vn_steady (@dots{},
+## "freeze", true)}) is linearised with each switch holding its output.
+##
 ## A linear model holds near its operating point only: check it against a
 ## simulation (@code{vn_stepresponse}) and against plant data before
 ## tuning a live loop with it, and have the tuning reviewed.
@@ -76,15 +90,19 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
   endif
   inputs = name_list (inputs, "INPUTS");
   outputs = name_list (outputs, "OUTPUTS");
-  [pnet, x, opstates] = lin_operating (net, op, "vn_linearize");
+  [pnet, x, opstates, held] = lin_operating (net, op, "vn_linearize");
+  if (! isempty (held))
+    net = hold_switches (net, held, [inputs, outputs]);
+  endif
   if (strcmp (opt.loop, "open"))
     [net, pnet, x, opstates] = open_loops (net, pnet, x, op);
   endif
 
   pin = zeros (1, numel (inputs), "int32");
+  inq = cell (1, numel (inputs));
   for j = 1:numel (inputs)
-    q = vn_quantity (net, inputs{j}, "input", "vn_linearize");
-    pin(j) = q.index;
+    inq{j} = vn_quantity (net, inputs{j}, "input", "vn_linearize");
+    pin(j) = inq{j}.index;
   endfor
   [~, first] = unique (inputs, "first");
   if (numel (first) < numel (inputs))
@@ -105,6 +123,7 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
            "vn_linearize: the operating point is from another network: its states are %s; this network has %s",
            strjoin (opstates.', ", "), strjoin (states(:).', ", "));
   endif
+  [B, D, bound] = inside_range (pnet, inq, x, pin, yout, B, D);
   nx = rows (A);
   if (opt.dense || (! opt.sparse && nx <= 200))
     A = full (A);
@@ -119,6 +138,10 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
   lin.outputs = outputs(:);
   lin.x = x;
   lin.note = "";
+  if (! isempty (bound))
+    lin.note = sprintf ("B and D of %s: one-sided, from inside the range",
+                        strjoin (bound, ", "));
+  endif
   lin.poles = [];
   lin.tau = [];
   lin.zeta = [];
@@ -126,8 +149,9 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
   if (isempty (opt.poles))
     opt.poles = nx <= 2000;
     if (! opt.poles)
-      lin.note = sprintf (["poles not computed: %d states exceed 2000 ", ...
-                           "(ask with \"poles\", true)"], nx);
+      lin.note = strtrim ([lin.note, " ", ...
+                           sprintf(["poles not computed: %d states exceed 2000 ", ...
+                                    "(ask with \"poles\", true)"], nx)]);
     endif
   endif
   if (opt.poles)
@@ -207,6 +231,60 @@ function [net, pnet, x, opstates] = open_loops (net, pnet, x, op)
   opstates = names(keep);
   pnet = vn_drop_units (pnet, drop);
   net = vn_drop_units (net, drop);
+endfunction
+
+## An input at a bound of its range (a valve at opening 0 or 1, a pump at
+## speed 0) is clipped there, so its derivative is one-sided: the law is
+## differentiated just inside the range (1e-8 of the smaller of the range
+## and the value's magnitude, at least 1e-8), one input at a time, and
+## only its columns of B and D are taken from there.
+function [B, D, bound] = inside_range (pnet, inq, x, pin, yout, B, D)
+  bound = {};
+  s = vn_schema ();
+  for j = 1:numel (inq)
+    q = inq{j};
+    k = s.(q.kind);
+    slot = find (strcmp (k.params, q.var), 1);
+    if (isempty (slot))
+      continue;   # a species concentration: linear in its value
+    endif
+    par = pnet.units(q.unit).par;
+    if (isfield (par, q.var))
+      v = par.(q.var);
+    else
+      v = k.defaults(slot);
+    endif
+    lo = k.lo(slot);
+    hi = k.hi(slot);
+    h = 1e-8 * min (hi - lo, max (1, abs (v)));
+    if (v <= lo)
+      v = lo + h;
+    elseif (v >= hi)
+      v = hi - h;
+    else
+      continue;
+    endif
+    pnet.units(q.unit).par.(q.var) = v;
+    [~, Bj, ~, Dj] = __vn_linearize__ (vn_pack (pnet), x, pin(j), yout, true);
+    pnet.units(q.unit).par = par;
+    B(:,j) = Bj;
+    D(:,j) = Dj;
+    bound{end+1} = sprintf ("%s.%s", pnet.units(q.unit).name, q.var);
+  endfor
+endfunction
+
+## Switches frozen in the operating point hold their output: they leave
+## the network, so they can be neither input nor output.
+function net = hold_switches (net, held, names)
+  for i = 1:numel (names)
+    dot = find ([names{i} "."] == ".", 1);
+    if (ischar (names{i}) && any (strcmp (names{i}(1:dot-1), held)))
+      error ("Octave:invalid-input-arg",
+             "vn_linearize: \"%s\": switch %s is held at its output in this operating point (vn_steady \"freeze\"), so it is not in the linear model",
+             names{i}, strjoin (strcat ("\"", held, "\""), ", "));
+    endif
+  endfor
+  net = vn_drop_units (net, cellfun (@(h) net.index.(h), held));
 endfunction
 
 ## A string or cell array of strings, as a row cell.

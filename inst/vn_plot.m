@@ -71,7 +71,11 @@ function h = vn_plot (s, varargin)
   if (nargin < 1)
     print_usage ();
   endif
-  kind = plot_kind (s);
+  if (isstruct (s) && all (isfield (s, {"measured", "predicted", "r2"})))
+    kind = "validate";                  # vn_validate, drawn by plot_validate
+  else
+    kind = plot_kind (s);
+  endif
   names = {};
   args = varargin;
   ## Options come in pairs, so an odd count starts with the quantity list.
@@ -111,6 +115,9 @@ function h = vn_plot (s, varargin)
         deftitle = "frequency response";
       case "fit"
         ax = plot_fit (hf, s, opt);
+        deftitle = "";
+      case "validate"
+        ax = plot_validate (hf, s, opt);
         deftitle = "";
     endswitch
     top = ax(1);

@@ -104,19 +104,9 @@ function [G, inputs, outputs] = gain_of (lin)
   if (isfield (lin, "gain") && ! isempty (lin.gain))
     G = full (lin.gain);
   else
-    warning ("off", "Octave:singular-matrix", "local");
-    warning ("off", "Octave:nearly-singular-matrix", "local");
-    if (rcond (full (lin.A)) < 1e-12)
-      ## Singular A: pair by pair, so only integrating gains become Inf.
-      G = zeros (size (lin.D));
-      for i = 1:rows (G)
-        for j = 1:columns (G)
-          [~, ~, ~, G(i,j)] = lin_polynomials (lin.A, lin.B(:,j), lin.C(i,:), lin.D(i,j));
-        endfor
-      endfor
-    else
-      G = full (lin.D - lin.C * (lin.A \ lin.B));
-    endif
+    ## states the inputs cannot reach, or that cannot reach the outputs,
+    ## are removed before any solve; integrating pairs give signed Inf
+    G = lin_gain (lin.A, lin.B, lin.C, lin.D);
   endif
   [p, m] = size (G);
   inputs = names_of (lin, "inputs", "u", m);

@@ -54,9 +54,17 @@
 ## @item iterations, method, solver
 ## Newton iterations, @qcode{"newton"} or @qcode{"newton after
 ## simulation"}, @qcode{"dense"} or @qcode{"klu"}.
+## @item frozen
+## names of the switches held by @qcode{"freeze"} (an empty cell
+## otherwise).
 ## @item net
 ## the network with the inputs set to their steady values, so that
 ## @code{vn_simulate (op.net, tspan, "initial", op)} continues from it.
+## With @qcode{"freeze"} the frozen switches are not in it and the inputs
+## they drive hold the switches' outputs; @code{vn_linearize} and
+## @code{vn_stepresponse} accept such an operating point with the full
+## network and linearise (and simulate) with each switch holding its
+## output.
 ## @end table
 ##
 ## Options:
@@ -104,7 +112,7 @@ function op = vn_steady (net, varargin)
       net.units(q.unit).par.(q.var) = ovr(i).value;
     endif
   endfor
-  net = freeze_switches (net, opt.freeze);
+  [net, frozen] = freeze_switches (net, opt.freeze);
   [padj, ytgt, tval, qadj] = inverse_problem (net, opt);
   x0 = start_state (opt.initial);
   pk = vn_pack (net);
@@ -127,6 +135,7 @@ function op = vn_steady (net, varargin)
     op.method = "newton";
   endif
   op.solver = info.solver;
+  op.frozen = frozen;
   op.net = net;
   if (opt.verbose)
     printf ("vn_steady: %s, %d iterations, residual %.3g m3/s (scaled %.3g), %s\n",
@@ -264,8 +273,9 @@ function x0 = start_state (init)
 endfunction
 
 ## Switches cycle: refuse, or hold each at the output it starts with.
-function net = freeze_switches (net, freeze)
+function [net, names] = freeze_switches (net, freeze)
   sw = find (strcmp ({net.units.kind}, "switch"));
+  names = cell (1, 0);
   if (isempty (sw))
     return;
   endif

@@ -32,12 +32,20 @@
 ## response from @code{step_metrics}: @code{gain} (final change / size),
 ## @code{final}, @code{t63}, @code{rise} (10-90 %), @code{settle} (2 %),
 ## @code{overshoot} (%), @code{peak}, @code{undershoot}, @code{inverse},
-## @code{deadtime} (1 % threshold).  The final change is the last sample
-## plus the part the linear model still has to go, so a run that stops
-## short of steady state still gives sound times.
+## @code{deadtime} (1 % threshold) and @code{settles}.  Everything comes
+## from the nonlinear model, never from the linear gain: the final change
+## is the nonlinear steady state the run heads for (Newton from the state
+## the run ended in, the input at its stepped value), so a run that stops
+## just inside the 2 % band still gives sound times.  @code{settles} is
+## false when the response does not settle away from zero: it returns to
+## zero (a flow out of a tank train whose outflow is held), it has no
+## steady state (an integrating level; @code{final} and @code{gain} NaN),
+## or it is still outside 2 % of its final change at the end of the run
+## (give a longer @qcode{"tend"}); @code{t63}, @code{rise}, @code{settle},
+## @code{overshoot} and the other times are NaN then.
 ## @item metrics_linear
 ## the same figures for the linear response, with the final change
-## gain x size.
+## gain x size (a signed Inf for an integrating pair, which never settles).
 ## @end table
 ##
 ## Options:
@@ -122,9 +130,10 @@ function sr = vn_stepresponse (net, op, input, amount, varargin)
   if (t(1) > 0)
     ts = [0; t];
   endif
-  ynl = nonlinear (pnet, x, step, ts, lin.outputs, opt);
+  [ynl, ~, xend] = nonlinear (pnet, x, step, ts, lin.outputs, opt);
   ynl = ynl(end-numel(t)+1:end,:) - y0;
   ylin = lin_deviation (lin.A, lin.B, lin.C, lin.D, du, t);
+  ynf = nonlinear_final (pnet, input, before + du, xend, lin.outputs) - y0;
 
   sr.t = t;
   sr.nonlinear = ynl;
@@ -135,16 +144,8 @@ function sr = vn_stepresponse (net, op, input, amount, varargin)
   sr.before = before;
   sr.lin = lin;
   for j = numel (lin.outputs):-1:1
-    yf = lin.gain(j) * du;
-    if (isfinite (yf))
-      ## Nonlinear final: last sample plus the linear tail still to come.
-      fnl = {"final", ynl(end,j) + yf - ylin(end,j)};
-      flin = {"final", yf};
-    else
-      fnl = flin = {};
-    endif
-    m(j) = step_metrics (t, ynl(:,j), du, fnl{:});
-    ml(j) = step_metrics (t, ylin(:,j), du, flin{:});
+    m(j) = step_metrics (t, ynl(:,j), du, "final", ynf(j));
+    ml(j) = step_metrics (t, ylin(:,j), du, "final", lin.gain(j) * du);
   endfor
   sr.metrics = m(:);
   sr.metrics_linear = ml(:);
@@ -226,15 +227,37 @@ function t = time_grid (opt, lin)
   t = linspace (0, tend, 400).';
 endfunction
 
-## Simulated outputs (rows time) and the start state the run used.
-function [Y, x0] = nonlinear (net, x, u, t, names, opt)
+## Simulated outputs (rows time), the start state the run used and the
+## state it ended in.
+function [Y, x0, xend] = nonlinear (net, x, u, t, names, opt)
   res = vn_simulate (net, t, u, "initial", x, "reltol", opt.reltol,
                      "abstol", opt.abstol);
   x0 = res.x(1,:).';
+  xend = res.x(end,:).';
   Y = zeros (numel (t), numel (names));
   for j = 1:numel (names)
     dot = find (names{j} == ".", 1);
     Y(:,j) = res.(names{j}(1:dot-1)).(names{j}(dot+1:end));
+  endfor
+endfunction
+
+## The outputs at the nonlinear steady state the run heads for: Newton
+## from the state the run ended in, with the input at its stepped value.
+## NaN where there is none (an integrating output, a switch that cycles).
+function y = nonlinear_final (net, input, value, xend, names)
+  y = NaN (1, numel (names));
+  try
+    op = vn_steady (net, input, value, "initial", xend, "simulate", false);
+  catch err
+    if (! any (strcmp (err.identifier, {"vesselnet:no-steady-state",
+                                        "vesselnet:solver-failure"})))
+      rethrow (err);
+    endif
+    return;
+  end_try_catch
+  for j = 1:numel (names)
+    dot = find (names{j} == ".", 1);
+    y(j) = op.(names{j}(1:dot-1)).(names{j}(dot+1:end));
   endfor
 endfunction
 

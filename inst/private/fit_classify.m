@@ -4,13 +4,18 @@
 ## vn_fit: inputs (input parameters of their unit) become signals, the
 ## rest must be outputs of their unit.  @var{pq} are the fitted
 ## parameters (from vn_quantity); fitting an input that a test drives is
-## refused.  Returns one struct per experiment.
+## refused.  Returns one struct per experiment.  Inputs get their
+## intersample rule (fit_hold) and their gaps filled; censored readings
+## of outputs are NaN in @code{y} (no part in the fit) and kept in
+## @code{ymeas} with the mask @code{cens}.  @code{inputs} and
+## @code{readings} say, per quantity, what was decided and counted.
 ## @end deftypefn
 
 function E = fit_classify (net, ex, pq)
   s = vn_schema ();
   E = struct ("t", {}, "name", {}, "u", {}, "u0", {}, "yname", {},
-              "yidx", {}, "y", {}, "w", {}, "start", {}, "levels", {});
+              "yidx", {}, "y", {}, "ymeas", {}, "cens", {}, "w", {},
+              "start", {}, "levels", {}, "inputs", {}, "readings", {});
   for k = 1:numel (ex)
     x = ex(k);
     who = sprintf ("vn_fit: experiment %d", k);
@@ -19,6 +24,20 @@ function E = fit_classify (net, ex, pq)
     endif
     u = struct ("quantity", {}, "t", {}, "v", {}, "hold", {}, "kind", {});
     u0 = {};
+    label = x.name;
+    if (isempty (label))
+      label = sprintf ("test %d", k);
+    endif
+    hold = "auto";
+    if (isfield (x, "hold"))
+      hold = x.hold;
+    endif
+    cens = false (size (x.data));
+    if (isfield (x, "censored") && isequal (size (x.censored), size (x.data)))
+      cens = x.censored;
+    endif
+    inputs = struct ("experiment", {}, "quantity", {}, "rule", {}, "how", {},
+                     "filled", {});
     yname = {};
     yidx = [];
     ycol = [];
@@ -27,10 +46,10 @@ function E = fit_classify (net, ex, pq)
       q = fit_quantity (net, s, name, who);
       col = x.data(:, j);
       if (q.isinput)
-        if (any (isnan (col)))
+        if (any (cens(:, j)))
           error ("Octave:invalid-input-arg",
-                 "%s: input \"%s\" holds %d NaN sample(s); an input must be known at every time",
-                 who, name, sum (isnan (col)));
+                 "%s: input \"%s\" has %d reading(s) at or past its \"range\"; an input must be known at every time, so only measured outputs may be censored",
+                 who, name, nnz (cens(:, j)));
         endif
         for i = 1:numel (pq)
           if (strcmp (pq{i}.name, name))
@@ -39,10 +58,17 @@ function E = fit_classify (net, ex, pq)
                    who, name);
           endif
         endfor
-        [tt, vv] = fit_breakpoints (x.t, col, x.hold);
+        [held, how, col, nfill] = fit_hold (x.t, col, hold);
+        [tt, vv] = fit_breakpoints (x.t, col, held);
         u(end+1) = struct ("quantity", name, "t", tt, "v", vv,
-                           "hold", x.hold, "kind", "table");
+                           "hold", held, "kind", "table");
         u0(end+1, :) = {q.unit, q.var, col(1)};
+        rule = "linear";
+        if (held)
+          rule = "held";
+        endif
+        inputs(end+1) = struct ("experiment", label, "quantity", name,
+                                "rule", rule, "how", how, "filled", nfill);
       else
         yname{end+1} = name;
         yidx(end+1) = q.index;
@@ -62,23 +88,31 @@ function E = fit_classify (net, ex, pq)
     elseif (! isempty (x.weights))
       w = sqrt (expand (x.weights, ny, "weights", who));
     endif
+    ymeas = x.data(:, ycol);
+    yc = cens(:, ycol);
+    y = ymeas;
+    y(yc) = NaN;
     levels = zeros (0, 2);
     if (strcmp (x.start, "measured"))
       for j = 1:ny
         dot = find (yname{j} == ".", 1);
         un = yname{j}(1:dot-1);
         ui = net.index.(un);
-        v = x.data(1, ycol(j));
+        v = y(1, j);
         if (strcmp (yname{j}(dot+1:end), "level")
             && strcmp (net.units(ui).kind, "tank") && ! isnan (v))
           levels(end+1, :) = [ui, v];
         endif
       endfor
     endif
+    readings = struct ("experiment", repmat ({label}, 1, ny),
+                       "quantity", yname, "used", num2cell (sum (! isnan (y), 1)),
+                       "censored", num2cell (sum (yc, 1)),
+                       "missing", num2cell (sum (isnan (ymeas), 1)));
     E(k) = struct ("t", x.t, "name", x.name, "u", u, "u0", {u0},
-                   "yname", {yname}, "yidx", int32 (yidx),
-                   "y", x.data(:, ycol), "w", w, "start", x.start,
-                   "levels", levels);
+                   "yname", {yname}, "yidx", int32 (yidx), "y", y,
+                   "ymeas", ymeas, "cens", yc, "w", w, "start", x.start,
+                   "levels", levels, "inputs", inputs, "readings", readings);
   endfor
 endfunction
 

@@ -1,20 +1,26 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{st} =} fit_stats (@var{J}, @var{r}, @var{p}, @var{names})
+## @deftypefn {} {@var{st} =} fit_stats (@var{J}, @var{r}, @var{p}, @var{dp}, @var{names})
 ## Standard errors, 95 % intervals (Student's t) and correlations of a
 ## least-squares fit from the Jacobian @var{J} of the weighted residuals
-## with respect to log p.  The covariance is s^2 (J'J)^-1 with s^2 the
-## residual variance, so the sigmas given need only be right relative to
-## each other.  Warns "vesselnet:fit-ill-conditioned", naming the
+## with respect to the fit's coordinates th (log p or p), @var{dp} = d p /
+## d th.  The covariance of th is s^2 (J'J)^-1 with s^2 the residual
+## variance, so the sigmas given need only be right relative to each
+## other; standard errors of p are |dp| times those of th (first order).  Warns "vesselnet:fit-ill-conditioned", naming the
 ## parameters, when J'J is near-singular or two estimates correlate
-## beyond 0.99.
+## beyond 0.99.  A parameter the residuals do not depend on gets an
+## infinite standard error and interval and NaN covariance entries.
 ## @end deftypefn
 
-function st = fit_stats (J, r, p, names)
+function st = fit_stats (J, r, p, dp, names)
   p = p(:);
+  dp = dp(:);
   [m, n] = size (J);
   dof = m - n;
   H = J' * J;
   sc = sqrt (diag (H));
+  ## a parameter the residuals do not move (a rim above every level the
+  ## test reached) has no interval: Inf, not the zero pinv would give
+  unseen = sc <= 1e-8 * max (sc);
   sc(sc == 0) = 1;
   Hs = H ./ (sc * sc');
   rc = rcond (Hs);
@@ -24,11 +30,15 @@ function st = fit_stats (J, r, p, names)
     s2 = NaN;
   endif
   Cs = pinv (Hs);
-  Cl = s2 * Cs ./ (sc * sc');          # covariance of log p
-  C = Cl .* (p * p');                  # first-order covariance of p
-  se = sqrt (max (diag (C), 0));
+  C = s2 * Cs ./ (sc * sc');           # covariance of th
+  se = abs (dp) .* sqrt (max (diag (C), 0));
   d = sqrt (max (diag (Cs), realmin));
   R = Cs ./ (d * d');
+  se(unseen) = Inf;
+  C(unseen, :) = NaN;
+  C(:, unseen) = NaN;
+  R(unseen, :) = NaN;
+  R(:, unseen) = NaN;
   if (dof > 0)
     tq = fit_tquantile (0.975, dof);
   else
@@ -41,11 +51,15 @@ function st = fit_stats (J, r, p, names)
   st.dof = dof;
   st.tquantile = tq;
   st.rcond = rc;
+  st.unseen = unseen;
   bad = {};
   if (rc < 1e-12)
-    weak = find (abs (sc) <= 1e-8 * max (sc) | diag (Hs) == 0);
+    weak = find (unseen | diag (Hs) == 0);
     bad{end+1} = sprintf ("the information matrix is near-singular (rcond %.2g)%s",
                           rc, listed (names, weak));
+  endif
+  if (any (unseen) && rc >= 1e-12)
+    bad{end+1} = sprintf ("not seen by the data: %s", strjoin (names(unseen), ", "));
   endif
   [i, j] = find (triu (abs (R) > 0.99, 1));
   for k = 1:numel (i)

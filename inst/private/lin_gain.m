@@ -2,15 +2,20 @@
 ## @deftypefn {} {@var{G} =} lin_gain (@var{A}, @var{B}, @var{C}, @var{D})
 ## Return the steady-state gains of a linear model, outputs x inputs.
 ##
-## For a nonsingular @var{A} the gain is @code{D - C (A \ B)}.  A singular
-## @var{A} (a tank whose outflow does not depend on its level, an
-## integrating process) has gains that are infinite only where an input
-## reaches an integrating mode that an output sees; the other gains stay
-## finite.  Up to 400 states each pair is resolved by cancelling common
-## factors of s in its transfer function (@code{lin_polynomials}); above,
-## the transfer function is evaluated at two small frequencies and a gain
-## that grows as 1/s is taken as a signed Inf.
-## @seealso{lin_polynomials, lin_modes}
+## For each pair of input j and output i only the states that matter are
+## kept: those the input reaches and that reach the output, found by
+## graph search on the non-zero pattern of @var{A}, @var{B} and @var{C}
+## (@code{lin_reach}).  A state outside that set (an idle catch tank that
+## receives only the spill of a tank below its rim, a tank upstream of the
+## input) cannot change the gain, so it is removed before any solve.
+## With no state left the gain is @code{D(i,j)}.  On the states kept,
+## @code{lin_steady_part} gives the part that settles and the part that
+## drifts: a drift the output sees makes the gain a signed Inf (an
+## integrating pair: the sign is that of the output's ramp for a positive
+## step); otherwise the gain is @code{D - C A# B}, which equals
+## @code{D - C A^-1 B} whenever the kept states have no integrating mode.
+## Pairs that keep the same states share one solve.
+## @seealso{lin_reach, lin_steady_part, vn_linearize}
 ## @end deftypefn
 
 function G = lin_gain (A, B, C, D)
@@ -18,60 +23,38 @@ function G = lin_gain (A, B, C, D)
   if (nargin != 4)
     print_usage ();
   endif
-  n = rows (A);
-  if (n == 0)
-    G = full (D);
-    return;
-  endif
-  if (nonsingular (A))
-    G = full (D - C * (A \ B));
-    return;
-  endif
   [p, m] = size (D);
-  G = zeros (p, m);
-  if (n <= 400)
-    Af = full (A);
-    for i = 1:p
-      for j = 1:m
-        [~, ~, ~, G(i,j)] = lin_polynomials (Af, full (B(:,j)),
-                                             full (C(i,:)), D(i,j));
-      endfor
-    endfor
-  else
-    ## G(s) ~ k/s where an integrator is reached: 100 times larger at a
-    ## frequency 100 times smaller.
-    s1 = 1e-7 * max (abs (diag (A)));
-    g1 = probe (A, B, C, D, s1);
-    g2 = probe (A, B, C, D, s1 / 100);
-    ## The residue g s must stand out of round-off for the pair.
-    scale = max (abs (C), [], 2) * max (abs (B), [], 1);
-    grows = abs (g2) > 10 * abs (g1) & abs (g2) * s1 / 100 > 1e-8 * full (scale);
-    ## Finite gains: straight line through the two probes, to s = 0.
-    G = g2 - (g1 - g2) / 99;
-    G(grows) = Inf * sign (g2(grows));
-  endif
-
-endfunction
-
-function ok = nonsingular (A)
-  if (issparse (A))
-    ## the pivots of a sparse LU: far cheaper than condest on large
-    ## networks, and enough to tell an integrating (singular) model
-    w = warning ("off", "all");
-    [~, U] = lu (A);
-    warning (w);
-    d = abs (diag (U));
-    ok = all (isfinite (d)) && min (d) > 1e-12 * max (d);
-  else
-    ok = rcond (A) > 1e-12;
-  endif
-endfunction
-
-function g = probe (A, B, C, D, s)
+  G = full (D);
   n = rows (A);
-  w = warning ("off", "all");
-  g = real (full (D + C * ((s * speye (n) - A) \ B)));
-  warning (w);
+  if (n == 0 || p == 0 || m == 0)
+    return;
+  endif
+  P = sparse (A != 0);
+  from = lin_reach (P, B != 0);        # n x m: reached by input j
+  to = lin_reach (P.', C.' != 0);       # n x p: reaching output i
+  for j = 1:m
+    if (! any (from(:,j)))
+      continue;
+    endif
+    keep = from(:,j) & to;              # n x p
+    [sets, ~, which] = unique (keep.', "rows");
+    for k = 1:rows (sets)
+      s = find (sets(k,:));
+      if (isempty (s))
+        continue;
+      endif
+      outs = find (which == k);
+      [x, z] = lin_steady_part (A(s,s), B(s,j));
+      Cs = C(outs,s);
+      g = D(outs,j) + Cs * x;
+      r = Cs * z;
+      ## a drift the output sees, beyond round-off of the projection
+      seen = abs (r) > 1e-9 * norm (z) * max (abs (Cs), [], 2);
+      g(seen) = Inf * sign (r(seen));
+      G(outs,j) = full (g);
+    endfor
+  endfor
+
 endfunction
 
 %!test
@@ -87,3 +70,21 @@ endfunction
 %! A = blkdiag (sparse (A), -speye (500));
 %! B = [B; zeros(500, 2)];  C = [C, zeros(3, 500)];
 %! assert (lin_gain (A, B, C, D), [Inf 0; 0 2; 0 -2], 1e-9);
+
+%!test
+%! ## An idle state (zero row and column) and lags 5 s to 6 h in series:
+%! ## gains 1, 1 and 0, with no warning (analytic: unit-gain lags).
+%! A = [-1/5 0 0; 1/21600 -1/21600 0; 0 0 0];
+%! B = [1/5; 0; 0];  C = eye (3);
+%! lastwarn ("");
+%! G = lin_gain (A, B, C, zeros (3, 1));
+%! assert (G, [1; 1; 0], 1e-12);
+%! assert (lastwarn (), "");
+
+%!test
+%! ## A closed pair of tanks (no outlet): each level integrates upwards
+%! ## for a feed into the first, the difference of levels settles
+%! ## (analytic, see lin_steady_part); a draw-off gives -Inf.
+%! A = [-1/2, 1/6; 1/2, -1/6];
+%! G = lin_gain (A, [1 -1; 0 0], [1 0; 0 1/3; 1 -1/3], zeros (3, 2));
+%! assert (G, [Inf -Inf; Inf -Inf; 1.5 -1.5], 1e-12);

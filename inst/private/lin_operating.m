@@ -1,5 +1,5 @@
 ## -*- texinfo -*-
-## @deftypefn {} {[@var{net}, @var{x}, @var{states}] =} lin_operating (@var{net}, @var{op}, @var{caller})
+## @deftypefn {} {[@var{net}, @var{x}, @var{states}, @var{held}] =} lin_operating (@var{net}, @var{op}, @var{caller})
 ## Resolve an operating point against a network for linear analysis.
 ##
 ## @var{op} is a struct from @code{vn_steady} (field @code{x}, the state
@@ -10,14 +10,21 @@
 ## heads) replace those of @var{net}; every other parameter stays as given
 ## in @var{net}.  A network in @var{op} with other units is an error.
 ##
-## Returns the network to pack, the state vector (possibly []) and the
+## A network in @var{op} that lacks only on/off switches of @var{net} is
+## an operating point with those switches frozen (@code{vn_steady (...,
+## "freeze", true)}): they are taken out of the network returned, the
+## inputs they drive held at the values in @var{op}.
+##
+## Returns the network to pack, the state vector (possibly []), the
 ## state names recorded in @var{op} (@{@} when none), which the caller
-## compares with the names the core reports.
+## compares with the names the core reports, and the names of the
+## switches held (@{@} when none).
 ## @end deftypefn
 
-function [net, x, states] = lin_operating (net, op, caller)
+function [net, x, states, held] = lin_operating (net, op, caller)
 
   states = {};
+  held = {};
   if (isempty (op))
     x = [];
     return;
@@ -45,19 +52,29 @@ function [net, x, states] = lin_operating (net, op, caller)
     states = op.states(:);
   endif
   if (isfield (op, "net") && ! isempty (op.net))
-    net = take_inputs (net, op.net, caller);
+    [net, held] = take_inputs (net, op.net, caller);
   endif
 
 endfunction
 
-## Copy the input values of the operating point's network into NET.
-function net = take_inputs (net, onet, caller)
+## Copy the input values of the operating point's network into NET.  An
+## operating point found with switches frozen (vn_steady's "freeze") has
+## them taken out and their inputs held: they are taken out of NET too.
+function [net, held] = take_inputs (net, onet, caller)
   if (! isstruct (onet) || ! isfield (onet, "units"))
     error ("Octave:invalid-input-arg",
            "%s: OP.net must be a network made by vn_network", caller);
   endif
+  held = {};
   mine = strcat ({net.units.name}, ":", {net.units.kind});
   theirs = strcat ({onet.units.name}, ":", {onet.units.kind});
+  out = ! ismember (mine, theirs);
+  if (any (out) && all (strcmp ({net.units(out).kind}, "switch"))
+      && isequal (mine(! out), theirs))
+    held = {net.units(out).name};
+    net = vn_drop_units (net, find (out));
+    mine = theirs;
+  endif
   if (! isequal (mine, theirs))
     extra = setdiff (theirs, mine);
     missing = setdiff (mine, theirs);
@@ -98,6 +115,19 @@ endfunction
 %! assert (x, [4; 1]);
 %! [~, x] = lin_operating (net, [], "t");
 %! assert (isempty (x));
+
+%!test
+%! ## An operating point without a switch of NET: the switch is held.
+%! net.units = struct ("name", {"T1", "P1", "LS1"}, "kind", {"tank", "pump", "switch"},
+%!                     "par", {struct("area", 2), struct("speed", 0), struct()});
+%! net.index = struct ("T1", 1, "P1", 2, "LS1", 3);
+%! onet = net;
+%! onet.units(3) = [];
+%! onet.units(2).par.speed = 1;
+%! [n2, ~, ~, held] = lin_operating (net, struct ("x", 4, "net", onet), "t");
+%! assert (held, {"LS1"});
+%! assert ({n2.units.name}, {"T1", "P1"});
+%! assert (n2.units(2).par.speed, 1);
 
 %!error <another network> lin_operating (struct ("units", struct ("name", {"T1"}, "kind", {"tank"})), struct ("x", 1, "net", struct ("units", struct ("name", {"T2"}, "kind", {"tank"}))), "t")
 %!error <state vector> lin_operating (struct (), [1 NaN], "t")

@@ -14,10 +14,10 @@
 ## Leading numerator coefficients below the round-off of that difference are
 ## removed.  @var{zeros} are @code{roots (num)}.
 ##
-## @var{gain} is the steady-state gain G(0): @code{D - C (A \ B)} when A is
-## well conditioned; otherwise common factors of s are cancelled and a
-## remaining pole at zero (an integrating process) gives a signed Inf.
-## @seealso{lin_modes, vn_frequency}
+## @var{gain} is the steady-state gain G(0) from @code{lin_gain}, not from
+## the coefficients: states the input cannot reach or that cannot reach the
+## output are removed first, and an integrating pair gives a signed Inf.
+## @seealso{lin_gain, lin_modes, vn_frequency}
 ## @end deftypefn
 
 function [num, den, zeros, gain] = lin_polynomials (A, B, C, D)
@@ -54,31 +54,10 @@ function [num, den, zeros, gain] = lin_polynomials (A, B, C, D)
   endif
   zeros = roots (num);
 
-  if (n == 0)
-    gain = D;
-  elseif (rcond (A) > 1e-12)
-    gain = D - C * (A \ B);
-  else
-    gain = dc_gain (num, den, tol);
+  if (nargout > 3)
+    gain = lin_gain (A, B, C, D);
   endif
 
-endfunction
-
-## Steady-state gain from coefficients, cancelling common factors of s.
-function gain = dc_gain (num, den, tol)
-  dtol = 1e3 * numel (den) * eps * max (abs (den));
-  while (numel (num) > 1 && abs (num(end)) <= tol
-         && numel (den) > 1 && abs (den(end)) <= dtol)
-    num(end) = [];
-    den(end) = [];
-  endwhile
-  if (all (abs (num) <= tol))
-    gain = 0;
-  elseif (abs (den(end)) <= dtol)
-    gain = Inf * sign (num(end));
-  else
-    gain = num(end) / den(end);
-  endif
 endfunction
 
 %!test

@@ -46,10 +46,18 @@
 ## @item deadtime
 ## apparent dead time: the first time the response passes 1 % of the final
 ## change in its direction (a threshold, not a tangent construction).
+## @item settles
+## true when the response settles away from zero within the record: the
+## final change is finite, at least 1 % of the largest excursion, and the
+## last sample lies within 2 % of it.  False for a response that returns
+## to zero (a flow through a train of tanks whose outflow is held), one
+## still moving at the end of the record, or an unknown (NaN) or infinite
+## final change (an integrating output).
 ## @end table
 ##
-## With no final change every figure but @code{gain} and @code{final} is NaN
-## (@code{inverse} false).
+## When the response does not settle every figure but @code{gain} and
+## @code{final} is NaN (@code{inverse} false): a time to a fraction of a
+## change that is not reached, or not known, means nothing.
 ## @seealso{lin_deviation}
 ## @end deftypefn
 
@@ -81,7 +89,8 @@ function m = step_metrics (t, y, varargin)
       error ("Octave:invalid-input-arg",
              "step_metrics: option names must be strings");
     endif
-    if (! (isnumeric (val) && isscalar (val) && isreal (val) && isfinite (val)))
+    if (! (isnumeric (val) && isscalar (val) && isreal (val)
+           && (isfinite (val) || strcmpi (name, "final"))))
       error ("Octave:invalid-input-arg",
              "step_metrics: option \"%s\" must be a finite real scalar", name);
     endif
@@ -138,11 +147,16 @@ function m = step_metrics (t, y, varargin)
   m.undershoot = NaN;
   m.inverse = false;
   m.deadtime = NaN;
-  if (! isfinite (yf) || abs (yf) <= 1e-12 * max (abs (d)) || yf == 0)
+  m.settles = false;
+  if (! isfinite (yf) || abs (yf) <= 0.01 * max (abs (d)) || yf == 0)
     return;
   endif
-
   r = d / yf;
+  if (abs (r(end) - 1) > 0.02)
+    return;
+  endif
+  m.settles = true;
+
   m.t63 = first_crossing (t, r, 1 - exp (-1));
   m.rise = first_crossing (t, r, 0.9) - first_crossing (t, r, 0.1);
   m.settle = settling (t, r, 0.02);
@@ -215,6 +229,25 @@ endfunction
 %! m = step_metrics ((0:10)', sin (0:10)' * 0, 1);
 %! assert (m.gain, 0);
 %! assert (isnan ([m.t63, m.rise, m.settle, m.overshoot, m.deadtime]));
+
+%!test
+%! ## settles: a first-order step does; a pulse that returns to zero, a
+%! ## record stopped at one time constant, an unknown or infinite final
+%! ## change do not, and their times are NaN (analytic responses).
+%! t = (0:0.05:40)';
+%! m = step_metrics (t, 1 - exp (-t / 5), 1, "final", 1);
+%! assert (m.settles);
+%! m = step_metrics (t, t / 5 .* exp (-t / 5), 1, "final", 0);
+%! assert (! m.settles);
+%! assert (isnan ([m.t63, m.rise, m.settle, m.overshoot]));
+%! m = step_metrics (t(t <= 5), 1 - exp (-t(t <= 5) / 5), 1, "final", 1);
+%! assert (! m.settles);
+%! assert (isnan ([m.t63, m.rise, m.settle, m.overshoot]));
+%! m = step_metrics (t, t, 1, "final", NaN);
+%! assert (! m.settles);
+%! assert (isnan (m.gain));
+%! m = step_metrics (t, t, 2, "final", Inf);
+%! assert ([m.gain, m.settles], [Inf, false]);
 
 %!error <strictly increasing> step_metrics ([0 2 1], [0 1 1])
 %!error <unknown option> step_metrics ([0 1 2], [0 1 1], 1, "foo", 2)

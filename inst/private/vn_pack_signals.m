@@ -20,13 +20,12 @@ function sig = vn_pack_signals (net, u, caller, cn)
   endif
   if (nargin < 4)
     cn = vn_compile (net);
-  else
-    key = [cn.key, __vn_hash__(u)];
-    j = find (strcmp (keys, key), 1);
-    if (! isempty (j))
-      sig = items{j};
-      return;
-    endif
+  endif
+  key = [cn.key, __vn_hash__(u)];
+  j = find (strcmp (keys, key), 1);
+  if (! isempty (j))
+    sig = items{j};
+    return;
   endif
   layout = cn.layout;
   if (! isstruct (u) || ! all (isfield (u, {"quantity", "t", "v", "hold"})))
@@ -80,7 +79,7 @@ function sig = vn_pack_signals (net, u, caller, cn)
   sig.held = find (held);
   sig.hunit = hunit(held);
   sig.hvar = hvar(held);
-  if (nargin == 4 && ! strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
+  if (! strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
     keys = [{key}, keys(1:min (end, 7))];
     items = [{sig}, items(1:min (end, 7))];
   endif

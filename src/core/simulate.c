@@ -30,6 +30,39 @@ typedef struct record {
   int *unit;        /* owning unit of each recorded output */
 } record;
 
+/* Outputs are gathered for a block of output times and then written a
+ * column at a time: X and Y are column-major with time down the rows, so
+ * writing one time's values straight in touches a cache line per state
+ * (perf, bench/: a sixth of a 20000-tank run, and the part growing
+ * faster than N). */
+typedef struct outblk {
+  double *X, *Y;    /* the caller's arrays (either may be NULL) */
+  int nt, nx, ny;   /* ny: columns of Y */
+  int cap, k0, n;   /* capacity in times, first time held, times held */
+  double *xb, *yb;  /* cap x nx and cap x ny, one time per row */
+} outblk;
+
+static void blk_flush (outblk *b)
+{
+  for (int i = 0; b->X && i < b->nx; i++)
+    for (int j = 0; j < b->n; j++)
+      b->X[b->k0 + j + (long) b->nt * i] = b->xb[(long) j * b->nx + i];
+  for (int i = 0; b->Y && i < b->ny; i++)
+    for (int j = 0; j < b->n; j++)
+      b->Y[b->k0 + j + (long) b->nt * i] = b->yb[(long) j * b->ny + i];
+  b->n = 0;
+}
+
+/* The row of output time k in the block (written out when full). */
+static int blk_row (outblk *b, int k)
+{
+  if (b->n > 0 && (k != b->k0 + b->n || b->n == b->cap))
+    blk_flush (b);
+  if (b->n == 0)
+    b->k0 = k;
+  return b->n++;
+}
+
 typedef struct sim {
   vn_net *net;
   int interrupted;
@@ -43,6 +76,7 @@ typedef struct sim {
   double *ycache;
   int cached;
   record rec;
+  outblk out;
   char cvmsg[256];  /* the integrator's own last complaint */
 } sim;
 
@@ -287,18 +321,19 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
     N_VDestroy (w);
 }
 
-static void store (vn_net *net, const record *R, int k, int nt, double t,
-                   const double *x, double *X, double *Y)
+static void store (vn_net *net, const record *R, outblk *B, int k,
+                   double t, const double *x)
 {
-  for (int i = 0; X && i < net->nx; i++)    /* X NULL: states not kept */
-    X[k + (long) nt * i] = x[i];
-  if (!Y)
+  int row = blk_row (B, k);
+  if (B->X)                                  /* X NULL: states not kept */
+    memcpy (B->xb + (long) row * B->nx, x, (size_t) B->nx * sizeof *x);
+  if (!B->Y)
     return;
+  double *yr = B->yb + (long) row * B->ny;
   if (!R->n)
     {
       vn_outputs (net, t, x, net->y);
-      for (int i = 0; i < net->ny; i++)
-        Y[k + (long) nt * i] = net->y[i];
+      memcpy (yr, net->y, (size_t) net->ny * sizeof *yr);
       return;
     }
   if (R->nodes_only)
@@ -315,7 +350,7 @@ static void store (vn_net *net, const record *R, int k, int nt, double t,
   else
     vn_outputs (net, t, x, net->y);
   for (int j = 0; j < R->n; j++)
-    Y[k + (long) nt * j] = net->y[R->idx[j]];
+    yr[j] = net->y[R->idx[j]];
 }
 
 /* One call of CVode toward `target`: a failure is diagnosed, a switching
@@ -359,7 +394,10 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
 static int output_at (sim *S, void *mem, int k, int nt, double t, N_Vector y,
                       double *X, double *Y, int read_sens)
 {
-  store (S->net, &S->rec, k, nt, t, N_VGetArrayPointer (y), X, Y);
+  (void) X;
+  (void) Y;
+  (void) nt;
+  store (S->net, &S->rec, &S->out, k, t, N_VGetArrayPointer (y));
   if (!S->yS)
     return VN_OK;
   double ts;
@@ -487,11 +525,25 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
     }
   S.sw = malloc ((size_t) (S.nsw + 1) * sizeof *S.sw);
   S.scratch = malloc ((size_t) net->nx * sizeof *S.scratch);
-  if (!S.sw || !S.scratch)
+  /* an output block of about 4 MB, 1 to 64 times */
+  S.out.X = X;
+  S.out.Y = Y;
+  S.out.nt = nt;
+  S.out.nx = net->nx;
+  S.out.ny = S.rec.n ? S.rec.n : net->ny;
+  long per = (long) (S.out.nx + S.out.ny + 1) * (long) sizeof (double);
+  S.out.cap = (int) (4194304 / per);
+  S.out.cap = S.out.cap < 1 ? 1 : S.out.cap > 64 ? 64 : S.out.cap;
+  S.out.xb = malloc ((size_t) S.out.cap * (S.out.nx + 1) * sizeof (double));
+  S.out.yb = malloc ((size_t) S.out.cap * (S.out.ny + 1) * sizeof (double));
+  if (!S.sw || !S.scratch || !S.out.xb || !S.out.yb)
     {
       free (bp);
       free (S.sw);
       free (S.scratch);
+      free (S.out.xb);
+      free (S.out.yb);
+      free (S.rec.unit);
       return VN_ENOMEM;
     }
   for (int i = 0, j = 0; i < net->nu; i++)
@@ -524,7 +576,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       for (int i = 0; i < S.nsw; i++)
         vn_switch_start (net, &net->u[S.sw[i]], x0);
     }
-  store (net, &S.rec, 0, nt, tout[0], x0, X, Y);
+  store (net, &S.rec, &S.out, 0, tout[0], x0);
   mem = CVodeCreate (CV_BDF, ctx);
   if (!mem)
     {
@@ -651,6 +703,7 @@ stats:
       stats->convfails = v;
   }
 done:
+  blk_flush (&S.out);
   net->seg_end = INFINITY;
   net->stop = NULL;
   if (mem)
@@ -675,5 +728,7 @@ done:
   free (S.rec.unit);
   free (S.sw);
   free (S.scratch);
+  free (S.out.xb);
+  free (S.out.yb);
   return st;
 }

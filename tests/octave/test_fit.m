@@ -134,7 +134,7 @@
 %!error <neither an input nor an output of orifice "O1"> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "O1.coef", ones (1, 11)), {"O1.coeff"})
 %!error <foo is not a numeric parameter of orifice "O1"; allowed: coeff> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "T1.level", ones (1, 11)), {"O1.foo"})
 %!error <the network has no unit "O9"> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "T1.level", ones (1, 11)), {"O9.coeff"})
-%!error <input "F1.flow" holds 1 NaN> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:2, "F1.flow", [1 NaN 1], "T1.level", [1 1 1]), {"O1.coeff"})
+%!error <input "F1.flow" has 1 reading\(s\) at or past its "range"> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:2, "F1.flow", [1 2 1], "T1.level", [1 1 1], "range", {"F1.flow", [0 2]}), {"O1.coeff"})
 %!error <has 2 samples but T has 3> vn_experiment (0:2, "F1.flow", [1 1], "T1.level", [1 1 1])
 %!error <holds only NaN> vn_experiment (0:2, "F1.flow", [1 1 1], "T1.level", NaN (1, 3))
 %!error <"sigma" has 2 value\(s\) but the test has 1> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:2, "T1.level", [1 1 1], "sigma", [1 2]), {"O1.coeff"})

@@ -1,0 +1,56 @@
+## -*- texinfo -*-
+## @deftypefn {} {@var{ax} =} plot_validate (@var{h}, @var{val}, @var{opt})
+## Draw a validation (vn_validate) in figure @var{h}: the layout of a fit
+## against data (plot_fit: measured markers, model lines, residuals
+## below), one column per test, with the censored readings drawn as large
+## open circles instead (they have no residual) and each column titled with the r2 of each output.  Return the axes handles as plot_fit does.
+## @end deftypefn
+
+function ax = plot_validate (h, val, opt)
+  fit = rmfield (val, {"residuals", "rmse", "r2"});
+  ## censored readings have no residual: drawn only as rings below
+  for k = 1:numel (fit)
+    fit(k).measured(fit(k).censored) = NaN;
+  endfor
+  ax = plot_fit (h, struct ("fit", fit), opt);
+  for k = 1:numel (val)
+    v = val(k);
+    [factor, ~] = plot_timescale (v.t(:), opt.time);
+    c = v.censored;
+    if (any (c(:)))
+      [i, j] = find (c);
+      line ("parent", ax(1,k), "xdata", v.t(i) * factor,
+            "ydata", v.measured(sub2ind (size (c), i, j)), "linestyle", "none",
+            "marker", "o", "markersize", 9, "color", [0 0 0],
+            "tag", "censored");
+    endif
+    ## one line: gnuplot cannot stack a two-line title over these axes
+    fig = arrayfun (@(j) sprintf ("%s %.3f", v.names{j}, v.r2(j)),
+                    1:numel (v.names), "uniformoutput", false);
+    note = sprintf ("%s: r2 %s", v.name, strjoin (fig, ", "));
+    if (any (c(:)))
+      note = sprintf ("%s; %d censored (rings)", note, nnz (c));
+    endif
+    title (ax(1,k), note, "interpreter", "none");
+  endfor
+endfunction
+
+%!test
+%! ## invented validation: a ring per censored reading, figures in the title
+%! t = (0:10:100).';
+%! val = struct ("t", t, "names", {{"T1.level", "T2.level"}},
+%!               "measured", [t/100, 2*t/100], "predicted", [t/100+0.01, 2*t/100],
+%!               "residuals", zeros (11, 2), "censored", [false(11, 1), t > 80],
+%!               "units", {{"m", "m"}}, "name", "unseen", "rmse", [0.01 0],
+%!               "r2", [0.99 1]);
+%! h = figure ("visible", "off");
+%! unwind_protect
+%!   ax = plot_validate (h, val, struct ("time", "s", "color", false));
+%!   ring = findobj (ax(1), "tag", "censored");
+%!   assert (get (ring, "xdata"), [90 100]);
+%!   assert (get (ring, "ydata"), [1.8 2]);
+%!   s = get (get (ax(1), "title"), "string");
+%!   assert (s, "unseen: r2 T1.level 0.990, T2.level 1.000; 2 censored (rings)");
+%! unwind_protect_cleanup
+%!   close (h);
+%! end_unwind_protect
