@@ -192,6 +192,10 @@ function est = vn_fit (net, ex, params, varargin)
     reason = sprintf ("%s; not seen by the data (no interval): %s", reason,
                       strjoin (params(st.unseen), ", "));
   endif
+  if (any (st.unresolved))
+    reason = sprintf ("%s; only a combination of %s is seen by the data (no intervals)",
+                      reason, strjoin (params(st.unresolved), ", "));
+  endif
   if (opt.starts > 1)
     reason = sprintf ("%s; best of %d starts (%d reached it, %d failed)",
                       reason, opt.starts, nnz (starts.reached),

@@ -114,7 +114,12 @@ function h = vn_plot (s, varargin)
         ax = plot_freq (hf, s, opt);
         deftitle = "frequency response";
       case "fit"
-        ax = plot_fit (hf, s, opt);
+        if (isfield (s.fit, "censored")
+            && any (cellfun (@(c) any (c(:)), {s.fit.censored})))
+          ax = plot_validate (hf, s.fit, opt);   # censored readings ringed
+        else
+          ax = plot_fit (hf, s, opt);
+        endif
         deftitle = "";
       case "validate"
         ax = plot_validate (hf, s, opt);

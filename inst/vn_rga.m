@@ -6,8 +6,11 @@
 ## steady state.
 ##
 ## @var{lin} is a linear model from @code{vn_linearize}; its steady-state
-## gains @code{lin.gain} are used, or @code{D - C A^-1 B} when that field
-## is absent.  @var{G} may instead be a square numeric gain matrix, outputs
+## gains @code{lin.gain} are used, or, when that field is absent, the same
+## gains computed from A, B, C, D: @code{D - C A^-1 B} on the states each
+## input reaches and that reach each output, so a state that carries no
+## flow at the operating point (an idle catch tank) does not make the
+## gains singular.  @var{G} may instead be a square numeric gain matrix, outputs
 ## in rows and inputs in columns.  The relative gain array (Bristol, 1966)
 ## is @code{R = G .* inv (G).'}: each element is the gain of one pair with
 ## all other loops open divided by its gain with all other loops closed.

@@ -87,3 +87,21 @@ endfunction
 %! [h, ~, v, n] = fit_hold (0:4, [NaN 1 NaN 3 NaN], false);
 %! assert (v.', [1 1 2 3 3]);
 %! assert (n, 3);
+
+## Random cases: 200 stepped inputs (each value kept for 2 to 6 samples,
+## any jumps) are held; 200 ramps (3 or more samples rising or falling in
+## a row between flat stretches) and 50 noisy measured signals are linear
+%!test
+%! rand ("state", 4);
+%! randn ("state", 4);
+%! for k = 1:200
+%!   v = repelem (round (100 * rand (1, 8)) / 10, randi ([2 6], 1, 8));
+%!   assert (fit_hold (1:numel (v), v, "auto"), true);
+%!   n = randi ([3 10]);
+%!   ramp = sign (rand () - 0.5) * (1:n) * (0.1 + rand ());
+%!   r = [zeros(1, randi (5)), ramp, repmat(ramp(end), 1, randi (5))];
+%!   assert (fit_hold (1:numel (r), r, "auto"), false);
+%! endfor
+%! for k = 1:50
+%!   assert (fit_hold (1:200, 1 + 0.01 * randn (1, 200), "auto"), false);
+%! endfor

@@ -7,8 +7,10 @@
 ## variance, so the sigmas given need only be right relative to each
 ## other; standard errors of p are |dp| times those of th (first order).  Warns "vesselnet:fit-ill-conditioned", naming the
 ## parameters, when J'J is near-singular or two estimates correlate
-## beyond 0.99.  A parameter the residuals do not depend on gets an
-## infinite standard error and interval and NaN covariance entries.
+## beyond 0.99.  A parameter the residuals do not depend on (unseen),
+## or one in a combination they do not depend on (unresolved: an
+## eigenvalue of the scaled J'J at roundoff), gets an infinite standard
+## error and interval and NaN covariance entries.
 ## @end deftypefn
 
 function st = fit_stats (J, r, p, dp, names)
@@ -29,16 +31,25 @@ function st = fit_stats (J, r, p, dp, names)
   else
     s2 = NaN;
   endif
-  Cs = pinv (Hs);
+  ## the inverse through the eigenvectors: a direction the data do not
+  ## see at all (eigenvalue at roundoff) leaves the parameters that share
+  ## it with no interval, rather than the zero variance a pseudo-inverse
+  ## would give them; a merely weak direction gives wide intervals
+  [V, ev] = eig ((Hs + Hs') / 2);
+  ev = diag (ev);
+  flat = ev <= n * eps * max (ev);
+  Cs = V(:, ! flat) * diag (1 ./ ev(! flat)) * V(:, ! flat)';
+  unresolved = ! unseen & any (abs (V(:, flat)) > 1e-6, 2);
   C = s2 * Cs ./ (sc * sc');           # covariance of th
   se = abs (dp) .* sqrt (max (diag (C), 0));
   d = sqrt (max (diag (Cs), realmin));
   R = Cs ./ (d * d');
-  se(unseen) = Inf;
-  C(unseen, :) = NaN;
-  C(:, unseen) = NaN;
-  R(unseen, :) = NaN;
-  R(:, unseen) = NaN;
+  none = unseen | unresolved;
+  se(none) = Inf;
+  C(none, :) = NaN;
+  C(:, none) = NaN;
+  R(none, :) = NaN;
+  R(:, none) = NaN;
   if (dof > 0)
     tq = fit_tquantile (0.975, dof);
   else
@@ -52,9 +63,10 @@ function st = fit_stats (J, r, p, dp, names)
   st.tquantile = tq;
   st.rcond = rc;
   st.unseen = unseen;
+  st.unresolved = unresolved;
   bad = {};
   if (rc < 1e-12)
-    weak = find (unseen | diag (Hs) == 0);
+    weak = find (unseen);
     bad{end+1} = sprintf ("the information matrix is near-singular (rcond %.2g)%s",
                           rc, listed (names, weak));
   endif

@@ -84,12 +84,19 @@ function [net, held] = take_inputs (net, onet, caller)
            list_or_none (extra), list_or_none (missing));
   endif
   s = vn_schema ();
-  for i = 1:numel (net.units)
-    k = s.(net.units(i).kind);
-    for name = k.params(k.isinput)
-      if (isfield (onet.units(i).par, name{1}))
-        net.units(i).par.(name{1}) = onet.units(i).par.(name{1});
-      endif
+  kinds = {net.units.kind};
+  for kind = unique (kinds)
+    k = s.(kind{1});
+    names = k.params(k.isinput);
+    if (isempty (names))
+      continue;   # tanks, orifices: nothing to copy, however many
+    endif
+    for i = find (strcmp (kinds, kind{1}))
+      for name = names
+        if (isfield (onet.units(i).par, name{1}))
+          net.units(i).par.(name{1}) = onet.units(i).par.(name{1});
+        endif
+      endfor
     endfor
   endfor
 endfunction

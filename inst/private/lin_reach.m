@@ -9,19 +9,13 @@
 ## path of edges leads from a seed of column j to l (the seeds included).
 ## Give the transpose of @var{P} to find the states that reach the seeds.
 ##
-## The search goes breadth first, one sparse product per level, so it
-## costs the number of edges times the longest shortest path.
+## The search runs compiled (@code{__vn_reach__}), depth first, in time
+## proportional to the states and edges it meets.
 ## @seealso{lin_gain, lin_steady_part}
 ## @end deftypefn
 
 function R = lin_reach (P, seeds)
-  P = double (sparse (P != 0));
-  R = full (seeds != 0);
-  front = R;
-  while (any (front(:)))
-    front = (P * front) != 0 & ! R;
-    R |= front;
-  endwhile
+  R = __vn_reach__ (sparse (double (P != 0)), double (seeds != 0));
 endfunction
 
 %!test

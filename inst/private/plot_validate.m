@@ -1,13 +1,16 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {@var{ax} =} plot_validate (@var{h}, @var{val}, @var{opt})
-## Draw a validation (vn_validate) in figure @var{h}: the layout of a fit
+## Draw a validation (vn_validate), or the @code{fit} of a fit whose
+## tests have censored readings, in figure @var{h}: the layout of a fit
 ## against data (plot_fit: measured markers, model lines, residuals
 ## below), one column per test, with the censored readings drawn as large
-## open circles instead (they have no residual) and each column titled with the r2 of each output.  Return the axes handles as plot_fit does.
+## open circles instead (they take no part, so they get no residual).
+## A validation's columns are titled with the r2 of each output.  Return
+## the axes handles as plot_fit does.
 ## @end deftypefn
 
 function ax = plot_validate (h, val, opt)
-  fit = rmfield (val, {"residuals", "rmse", "r2"});
+  fit = rmfield (val, intersect (fieldnames (val), {"residuals", "rmse", "r2"}));
   ## censored readings have no residual: drawn only as rings below
   for k = 1:numel (fit)
     fit(k).measured(fit(k).censored) = NaN;
@@ -25,9 +28,12 @@ function ax = plot_validate (h, val, opt)
             "tag", "censored");
     endif
     ## one line: gnuplot cannot stack a two-line title over these axes
-    fig = arrayfun (@(j) sprintf ("%s %.3f", v.names{j}, v.r2(j)),
-                    1:numel (v.names), "uniformoutput", false);
-    note = sprintf ("%s: r2 %s", v.name, strjoin (fig, ", "));
+    note = v.name;
+    if (isfield (v, "r2"))
+      fig = arrayfun (@(j) sprintf ("%s %.3f", v.names{j}, v.r2(j)),
+                      1:numel (v.names), "uniformoutput", false);
+      note = sprintf ("%s: r2 %s", note, strjoin (fig, ", "));
+    endif
     if (any (c(:)))
       note = sprintf ("%s; %d censored (rings)", note, nnz (c));
     endif
@@ -51,6 +57,21 @@ endfunction
 %!   assert (get (ring, "ydata"), [1.8 2]);
 %!   s = get (get (ax(1), "title"), "string");
 %!   assert (s, "unseen: r2 T1.level 0.990, T2.level 1.000; 2 censored (rings)");
+%! unwind_protect_cleanup
+%!   close (h);
+%! end_unwind_protect
+
+%!test
+%! ## the fit of a test with censored readings: rings, no r2
+%! t = (0:10:100).';
+%! fit = struct ("t", t, "names", {{"T2.level"}}, "measured", 2 * t / 100,
+%!               "predicted", 2 * t / 100, "censored", t > 80, "units", {{"m"}},
+%!               "name", "step test");
+%! h = figure ("visible", "off");
+%! unwind_protect
+%!   ax = plot_validate (h, fit, struct ("time", "s", "color", false));
+%!   assert (get (findobj (ax(1), "tag", "censored"), "xdata"), [90 100]);
+%!   assert (get (get (ax(1), "title"), "string"), "step test; 2 censored (rings)");
 %! unwind_protect_cleanup
 %!   close (h);
 %! end_unwind_protect

@@ -6,6 +6,16 @@
 ## @end deftypefn
 
 function tout = sim_times (tspan, dt, fn)
+  ## the common case first, in few operations: [t0 tf] and a good dt
+  if (numel (tspan) == 2 && isscalar (dt) && isreal (tspan) && isreal (dt)
+      && isnumeric (tspan) && tspan(2) > tspan(1) && dt > 0
+      && isfinite (tspan(2) - tspan(1) + dt))
+    tout = (tspan(1):dt:tspan(2)).';
+    if (tspan(2) - tout(end) > 1e-9 * max (1, abs (tspan(2))))
+      tout(end+1) = tspan(2);
+    endif
+    return;
+  endif
   if (! isnumeric (tspan) || ! isreal (tspan) || numel (tspan) < 2
       || any (! isfinite (tspan)))
     error ("Octave:invalid-input-arg",

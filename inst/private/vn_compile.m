@@ -28,28 +28,35 @@
 ## afresh), for comparisons.
 ## @end deftypefn
 
-function cn = vn_compile (net, part, idx)
+function cn = vn_compile (net, part = "", idx = [])
   persistent keys = {};
   persistent items = {};
-  if (nargin < 2)
-    part = "";
-  endif
-  if (! (isstruct (net) && isscalar (net) && isfield (net, "type")
-         && strcmp (net.type, "vesselnet.network")))
-    error ("Octave:invalid-input-arg",
-           "vesselnet: NET must be a network made by vn_network");
-  endif
+  ## A known key was a network packed before, so it needs no checking:
+  ## the common case costs the fingerprint and one comparison.
   key = __vn_hash__ (net);
   j = find (strcmp (keys, key), 1);
-  if (isempty (j))
+  if (! isempty (j) && strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
+    j = [];                        # the cache is off: compile afresh
+  endif
+  if (! isempty (j))
+    cn = items{j};
+    if (isempty (part) || (part(1) == "r" && numel (part) == 7
+                           && ! isempty (cn.tmpl))
+        || (part(1) == "l" && ! isempty (cn.levels)))
+      return;
+    endif
+  else
+    if (! (isstruct (net) && isscalar (net) && isfield (net, "type")
+           && strcmp (net.type, "vesselnet.network")))
+      error ("Octave:invalid-input-arg",
+             "vesselnet: NET must be a network made by vn_network");
+    endif
     cn.key = key;
     cn.pk = vn_pack (net, "uncached");
     cn.layout = vn_quantity (net);
     cn.tmpl = [];
     cn.levels = [];
     j = 0;
-  else
-    cn = items{j};
   endif
   fresh = false;
   if (strcmp (part, "results") && isempty (cn.tmpl))
@@ -97,7 +104,7 @@ function tm = full_template (net, layout)
     idx = find (strcmp (kinds, kk{c}));
     k = s.(kk{c});
     inp = find (k.isinput);
-    inp = inp(! ismember (k.params(inp), k.outputs));
+    inp = inp(! cellfun (@(q) any (strcmp (q, k.outputs)), k.params(inp)));
     [outs, ounits] = vn_outputs_of (net, kk{c});
     F = [outs(:); k.params(inp)(:)];
     no = numel (outs);
@@ -173,27 +180,37 @@ function vals = input_values (U, k, inp, ambient)
   endif
 endfunction
 
-## How vn_props_names renames the fields F of one unit U: the result's
-## fields F2 come from F(MAP); M2 are their units of measure.
+## How carried properties are named in results (the rule of
+## vn_props_names, applied to the field list once per kind): on tanks,
+## feeds and boundaries the core's slots c1..c8 take the declared species'
+## names (unit of measure "conc") and unused slots go, as does the
+## temperature of a network that is not thermal.  The result's fields F2
+## come from F(MAP); M2 are their units of measure.
 function [map, F2, m2] = props_map (net, U, F, m)
-  sub = net;
-  sub.units = U;
-  part = struct ();
-  part.(U.name) = cell2struct (num2cell (1:numel (F)).', F, 1);
-  part.units = struct ();
-  part.units.(U.name) = m;
-  part = vn_props_names (sub, part);
-  r = part.(U.name);
-  F2 = fieldnames (r);
-  v = struct2cell (r);
-  if (! (all (cellfun ("isclass", v, "double"))
-         && all (cellfun ("numel", v) == 1)))
-    error ("vesselnet:core",
-           "vesselnet: result fields of %s \"%s\" are not a selection of its outputs (internal error)",
-           U.kind, U.name);
+  map = 1:numel (F);
+  F2 = F(:);
+  if (any (strcmp (U.kind, {"tank", "feed", "boundary"})))
+    sp = net.options.species;
+    keep = true (1, numel (F));
+    for j = 1:numel (F)
+      f = F{j};
+      if (numel (f) == 2 && f(1) == "c" && any (f(2) == "12345678"))
+        k = f(2) - "0";
+        keep(j) = k <= numel (sp);
+        if (keep(j))
+          F2{j} = sp{k};
+          m.(f) = "conc";
+        endif
+      elseif (strcmp (f, "temperature") && ! net.options.thermal)
+        keep(j) = false;
+      endif
+    endfor
+    map = map(keep);
+    uom = cellfun (@(f) m.(f), F(keep), "uniformoutput", false);
+    F2 = F2(keep);
+    m = cell2struct (uom(:), F2, 1);
   endif
-  map = [v{:}];
-  m2 = part.units.(U.name);
+  m2 = m;
 endfunction
 
 ## Template of a record of the outputs IDX (0-based): one field per
@@ -264,3 +281,35 @@ endfunction
 %! assert (cn.tmpl.units.T1.chlorine, "conc");
 
 %!error <NET must be a network> vn_compile (struct ("a", 1))
+
+%!test
+%! ## the template names carried properties as vn_props_names does
+%! for th = [false true]
+%!   net = vn_network ("w", "species", {"chlorine", "iron"}, "thermal", th);
+%!   net = vn_tank (net, "T1", "area", 1, "level", 1, "chlorine", 0.5);
+%!   net = vn_feed (net, "F1", "T1", "flow", 0.01, "iron", 0.1);
+%!   net = vn_boundary (net, "B1", "head", 2);
+%!   net = vn_orifice (net, "O1", "T1", "B1", "coeff", 0.01);
+%!   cn = vn_compile (net, "results");
+%!   s = vn_schema ();
+%!   for i = 1:numel (net.units)
+%!     u = net.units(i);
+%!     k = s.(u.kind);
+%!     [outs, ounits] = vn_outputs_of (net, u.kind);
+%!     inp = k.params(k.isinput);
+%!     inp = inp(! ismember (inp, outs));
+%!     uu = k.units(k.isinput);
+%!     uu = uu(! ismember (k.params(k.isinput), outs));
+%!     F = [outs(:); inp(:)];
+%!     part = struct ();
+%!     part.(u.name) = cell2struct (num2cell (1:numel (F)).', F, 1);
+%!     part.units = struct ();
+%!     part.units.(u.name) = cell2struct ([ounits(:); uu(:)], F, 1);
+%!     sub = net;
+%!     sub.units = u;
+%!     part = vn_props_names (sub, part);
+%!     g = cn.tmpl.group(i) + 1;
+%!     assert (cn.tmpl.fields{g}, fieldnames (part.(u.name)));
+%!     assert (cn.tmpl.units.(u.name), part.units.(u.name));
+%!   endfor
+%! endfor

@@ -23,7 +23,7 @@ function sig = vn_pack_signals (net, u, caller, cn)
   endif
   key = [cn.key, __vn_hash__(u)];
   j = find (strcmp (keys, key), 1);
-  if (! isempty (j))
+  if (! isempty (j) && ! strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
     sig = items{j};
     return;
   endif

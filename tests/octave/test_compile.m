@@ -178,3 +178,12 @@
 %! assert (r.V1.opening, [0.5 * ones(5, 1); 0.2 * ones(6, 1)], 0);
 %! r2 = vn_simulate (net, [0 100], "dt", 10);
 %! assert (r2.V1.opening, 0.5 * ones (11, 1), 0);
+
+%!test
+%! ## with the cache off, a network seen before is packed again, and the
+%! ## result is the same
+%! net = two_tanks ();
+%! r1 = vn_simulate (net, [0 100], "dt", 10);
+%! r2 = uncached (net, [0 100], "dt", 10);
+%! assert (r2.T1.level, r1.T1.level, 0);
+%! assert (r2.units, r1.units);

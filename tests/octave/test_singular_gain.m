@@ -35,6 +35,10 @@
 ## Central difference quotient of the steady outputs for input IN.
 %!function g = quotient (net, op, in, outs, rel)
 %!  v0 = op.input_values(strcmp (op.input_names, in));
+%!  if (isempty (v0))   # a controller's setpoint
+%!    dot = find (in == ".", 1);
+%!    v0 = net.units(net.index.(in(1:dot-1))).par.(in(dot+1:end));
+%!  endif
 %!  h = rel * max (abs (v0), 1e-3);
 %!  o2 = vn_steady (net, in, v0 + h, "initial", op, "tol", 1e-14);
 %!  o1 = vn_steady (net, in, v0 - h, "initial", op, "tol", 1e-14);
@@ -81,6 +85,33 @@
 %! ## sparse route, same gains
 %! ls = vn_linearize (net, op, {"P1.speed", "F1.flow"}, outs, "sparse", true);
 %! assert (ls.gain, lin.gain, 1e-9 * max (abs (lin.gain(:))));
+
+%!test
+%! ## Closed loops beside the idle catch tank: a level controller on the
+%! ## day tank H2 through an outlet valve, proportional and then PI.
+%! ## Gains (setpoint too) against operating-point quotients; with
+%! ## integral action H2 follows its setpoint exactly (gain 1, and 0 for
+%! ## the feed), as integral action requires (Seborg et al., memory).
+%! for reset = [0, 600]
+%!   net = juice_line ();
+%!   net = vn_valve (net, "LV1", "H2", "", "kv", 150, "opening", 0.5, ...
+%!                   "characteristic", "linear");
+%!   opts = {"measure", "H2.level", "manipulate", "LV1.opening", ...
+%!           "setpoint", 1.5, "gain", 2, "action", "direct", "limits", [0 1]};
+%!   if (reset > 0)
+%!     opts = [opts, {"reset", reset}];
+%!   endif
+%!   net = vn_controller (net, "LC1", opts{:});
+%!   op = vn_steady (net, "tol", 1e-14);
+%!   outs = {"B1.level", "S1.level", "H1.level", "H2.level", "LV1.flow", "C1.level"};
+%!   lastwarn ("");
+%!   lin = vn_linearize (net, op, {"F1.flow", "P1.speed", "LC1.setpoint"}, outs);
+%!   assert (lastwarn (), "");
+%!   check_gains (net, op, lin, 1e-5);
+%!   if (reset > 0)
+%!     assert (lin.gain(4,[1 3]), [0, 1], 1e-9);
+%!   endif
+%! endfor
 
 %!test
 %! ## The relative gain array uses the corrected gains: B1 and S1 levels by
