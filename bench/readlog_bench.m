@@ -48,7 +48,7 @@ ntag = 20;
 dirn = tempname ();
 mkdir (dirn);
 unwind_protect
-  printf ("\n4. Plant records: vn_readlog on %d rows x %d tags\n\n", n, ntag);
+  printf ("\n10. Plant records: vn_readlog on %d rows x %d tags\n\n", n, ntag);
   fclean = fullfile (dirn, "clean.csv");
   fbad = fullfile (dirn, "bad.csv");
   tic; mb = readlog_write (fclean, n, ntag, false) / 2^20; tw = toc;

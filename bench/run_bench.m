@@ -215,3 +215,6 @@ run (fullfile (fileparts (mfilename ("fullpath")), "fit_sensor_bench.m"));
 ## 5-9. Speed from Octave: call against core, ensembles, large chains,
 ## builders, fit with and without the compiled-network cache
 run (fullfile (fileparts (mfilename ("fullpath")), "speed_bench.m"));
+
+## 10. Reading plant records (bench/readlog_bench.m)
+run (fullfile (fileparts (mfilename ("fullpath")), "readlog_bench.m"));

@@ -41,6 +41,7 @@ function net = vn_heater (net, name, tank, varargin)
   build_check_ref (fn, sprintf ("heater \"%s\"", name), net, "TANK", tank,
                    {"tank"});
   o = loop_options (varargin, {"duty", "max", "lag", "minlevel"}, fn, name);
+  o = loop_units (net, name, o, fn, "heater");
   par = struct ();
   if (isfield (o, "duty"))
     par.duty = loop_scalar (o.duty, "duty", name, fn, false);

@@ -239,6 +239,12 @@ function [hdr, c, skipped] = read_header (c, where, line0)
                                                               line0 + found(2));
   hdr.fmt = [hdr.tfmt, repmat(",%f", 1, hdr.ntag)];
   hdr.fmtblank = [hdr.tfmt, repmat(" ,%f", 1, hdr.ntag)];   # blanks before ","
+  ## every field after the time that is not a number becomes NaN: first
+  ## the empty ones (a comma before a comma or the line end; regexprep
+  ## leaves empty matches alone), then the others
+  hdr.nanpat = {',(?=[,\n])', ...
+                ['(?<=,)(?! *[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)? *', ...
+                 '(?:,|\n))[^,\n]*']};
   ## a row sscanf must read after the last one, so that a last row with
   ## fields to spare cannot end the scan quietly
   hdr.sentinel = [t1, repmat(",0", 1, hdr.ntag), "\n"];
@@ -289,9 +295,10 @@ endfunction
 
 ## Parse one block of whole lines: the rows as numbers (time columns, then
 ## tags), the file line of each row, and the last row's time.  Most blocks
-## are read by one sscanf; a block it cannot read whole (unreadable
-## entries, empty fields, blanks around values) is read again with the
-## lines that need it cleaned by a regular expression.
+## are read by one sscanf.  Where it stops (an unreadable entry, an empty
+## field, blanks around a value), that line is cleaned by a regular
+## expression and sscanf goes on from the next line; a block with many
+## such lines is read by slow_block instead.
 function [p, last] = parse_block (c, hdr, line0, where, last)
   if (! isempty (strfind (c, "\r")))
     c(c == "\r") = [];
@@ -309,7 +316,15 @@ function [p, last] = parse_block (c, hdr, line0, where, last)
   nlines = sum (c == "\n");
   nempty = numel (strfind (["\n" c], "\n\n"));
   n = nlines - nempty;
-  [v, cnt] = sscanf ([c hdr.sentinel], hdr.fmt);
+  ## sscanf reads a sign, blanks and then digits as one number ("-\n28"
+  ## is -28): such a block is read carefully
+  sb = sign_blank (c);
+  if (isempty (sb))
+    [v, cnt] = sscanf ([c hdr.sentinel], hdr.fmt);
+  else
+    v = [];
+    cnt = -1;
+  endif
   if (cnt == (n + 1) * hdr.nper)
     rows = reshape (v(1:n*hdr.nper), hdr.nper, n).';
     if (nempty == 0)
@@ -318,6 +333,8 @@ function [p, last] = parse_block (c, hdr, line0, where, last)
       nl = find (c == "\n");
       lineno = line0 + find (diff ([0 nl]) > 1);
     endif
+  elseif (isempty (sb))
+    [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt);
   else
     [rows, lineno] = slow_block (c, hdr, line0, where);
   endif
@@ -353,6 +370,86 @@ function [p, last] = parse_block (c, hdr, line0, where, last)
   p.data = data;
 endfunction
 
+## Go on from where sscanf stopped, one cleaned line at a time, at most
+## 32 times per block; then, or when lines and rows do not match (a line
+## of blanks that sscanf skipped), read the rest by slow_block.
+function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
+  nl = find (c == "\n");
+  st = [1, nl(1:end-1) + 1];
+  ne = find (nl > st);            # lines that are not empty
+  m = numel (ne);
+  np = hdr.nper;
+  rows = zeros (m, np);
+  keep = true (1, m);
+  r = 1;
+  for fails = 0:32
+    nfull = min (floor (cnt / np), m - r + 1);
+    rows(r:r+nfull-1,:) = reshape (v(1:nfull*np), np, nfull).';
+    r += nfull;
+    if (r > m)
+      if (cnt == (nfull + 1) * np)
+        break;                    # the sentinel row was read too
+      endif
+      r = m;                      # the last row holds more than it should
+    endif
+    i = ne(r);
+    [x, how] = mend_line (c(st(i):nl(i)), hdr);
+    switch (how)
+      case "blank"
+        keep(r) = false;
+      case "mended"
+        rows(r,:) = x;
+      case "bad"
+        bad_row (c, st, nl, i, 0, hdr, line0, where);
+      otherwise
+        ## rows and lines out of step (a line of blanks sscanf skipped, or
+        ## a line before with fields to spare): the block read carefully
+        [rows, lineno] = slow_block (c, hdr, line0, where);
+        return;
+    endswitch
+    r += 1;
+    if (r > m)
+      break;
+    elseif (fails >= 32)
+      ## the rest of the block, read carefully
+      done = find (keep(1:r-1));
+      [rest, lrest] = slow_block (c(st(ne(r)):end), hdr, line0 + ne(r) - 1,
+                                  where);
+      rows = [rows(done,:); rest];
+      lineno = [line0 + ne(done), lrest];
+      return;
+    endif
+    [v, cnt] = sscanf ([c(st(ne(r)):end) hdr.sentinel], hdr.fmt);
+  endfor
+  rows = rows(keep,:);
+  lineno = line0 + ne(keep);
+endfunction
+
+## One line sscanf stopped on: "blank" (blanks and delimiters only),
+## "mended" (its fields that are not numbers set to NaN, read into X),
+## "bad" (still unreadable: a time stamp or the number of fields), or
+## "fine" (it reads as it is, so it was not the line that stopped sscanf).
+function [x, how] = mend_line (s, hdr)
+  x = [];
+  if (all (s == " " | s == "," | s == "\t" | s == "\n"))
+    how = "blank";
+    return;
+  endif
+  [~, cnt] = sscanf ([s hdr.sentinel], hdr.fmt);
+  if (cnt == 2 * hdr.nper)
+    how = "fine";
+    return;
+  endif
+  s = regexprep (s, hdr.nanpat, {",NaN", "NaN"});
+  [x, cnt] = sscanf ([s hdr.sentinel], hdr.fmtblank);
+  if (cnt == 2 * hdr.nper)
+    x = x(1:hdr.nper).';
+    how = "mended";
+  else
+    how = "bad";
+  endif
+endfunction
+
 ## The careful reading of a block: blank lines (blanks and delimiters
 ## only) skipped, lines with characters no number or time stamp holds or
 ## with an empty field cleaned by a regular expression (every field that
@@ -372,6 +469,7 @@ function [rows, lineno] = slow_block (c, hdr, line0, where)
   endfor
   odd(1:end-1) = odd(1:end-1) | (c(1:end-1) == ","
                                  & (c(2:end) == "," | c(2:end) == "\n"));
+  odd(sign_blank (c)) = true;
   sus = false (1, numel (nl));
   pos = find (odd);
   clear odd;
@@ -389,12 +487,7 @@ function [rows, lineno] = slow_block (c, hdr, line0, where)
     sus = keep;          # a malformed number among plain characters
   endif
   if (any (sus))
-    ## empty fields first: regexprep leaves empty matches alone
-    s = strrep (select (c, st, nl, sus), ",,", ",NaN,");
-    s = strrep (strrep (s, ",,", ",NaN,"), ",\n", ",NaN\n");
-    s = regexprep (s,
-                   ['(?<=,)(?! *[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)? *', ...
-                    '(?:,|\n))[^,\n]*'], "NaN");
+    s = regexprep (select (c, st, nl, sus), hdr.nanpat, {",NaN", "NaN"});
     [B, ok, nread] = scan (s, [], [], [], hdr);
     if (! ok)
       bad_row (c, st, nl, find (sus), nread, hdr, line0, where);
@@ -408,6 +501,12 @@ endfunction
 function s = line_text (c, i)
   nl = [0, find(c == "\n")];
   s = strtrim (c(nl(i)+1:nl(i+1)-1));
+endfunction
+
+## Positions of a sign followed by a blank, a tab or a line end.
+function p = sign_blank (c)
+  p = [strfind(c, "- "), strfind(c, "-\n"), strfind(c, "-\t"), ...
+       strfind(c, "+ "), strfind(c, "+\n"), strfind(c, "+\t")];
 endfunction
 
 ## The text of the lines marked in WHICH.
@@ -447,6 +546,13 @@ endfunction
 function bad_row (c, st, nl, lines, nread, hdr, line0, where)
   r = floor (nread / hdr.nper) + 1;
   r = min (r, numel (lines));
+  if (r > 1)
+    ## a row with fields to spare is read whole; sscanf stops on the next
+    p = lines(r-1);
+    if (sum (c(st(p):nl(p)-1) == ",") != hdr.ntag)
+      r -= 1;
+    endif
+  endif
   i = lines(r);
   txt = c(st(i):nl(i)-1);
   nf = sum (txt == ",") + 1;

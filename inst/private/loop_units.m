@@ -1,11 +1,14 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {@var{o} =} loop_units (@var{net}, @var{name}, @var{o}, @var{fn}, @var{kind})
-## Convert the options of a controller or switch given as "VALUE UNIT".
+## Convert the options of a controller, switch or heater given as
+## "VALUE UNIT".
 ##
 ## Set points ("setpoint", "on", "off") take the unit of the measured
 ## quantity, "bias" that of the manipulated input, times ("reset",
-## "deriv", "filter") a unit of time.  The measured and manipulated
-## quantities must have been checked (loop_refs).  Numbers pass unchanged.
+## "deriv", "filter", "lag") a unit of time, a heater's "duty" and "max"
+## a unit of power and its "minlevel" a length.  The measured and
+## manipulated quantities must have been checked (loop_refs).  Numbers
+## pass unchanged.
 ## @end deftypefn
 
 function o = loop_units (net, name, o, fn, kind)
@@ -24,8 +27,12 @@ function o = loop_units (net, name, o, fn, kind)
       case "bias"
         o.(f{i}) = units_value (fn, label, f{i}, v,
                                 units_of (net, o.manipulate, "input", caller));
-      case {"reset", "deriv", "filter"}
+      case {"reset", "deriv", "filter", "lag"}
         o.(f{i}) = units_value (fn, label, f{i}, v, "s");
+      case {"duty", "max"}
+        o.(f{i}) = units_value (fn, label, f{i}, v, "W");
+      case "minlevel"
+        o.(f{i}) = units_value (fn, label, f{i}, v, "m");
     endswitch
   endfor
 endfunction

@@ -157,3 +157,76 @@
 %!error <vn_readlog: ".*empty.csv": the file holds no header line followed by data> vn_readlog (put (dir, "empty.csv", "\n\ntime,x\n"))
 %!error <vn_readlog: ".*noname.csv" line 1: column 2 of the header has no tag name> vn_readlog (put (dir, "noname.csv", "time,,x\n0,1,2\n"))
 %!error <vn_readlog: FILE must be a file name, got a double> vn_readlog (3)
+%!error <vn_readlog: ".*mid.csv" line 3 has 4 fields, the header 3: "10,1,2,3"> vn_readlog (put (dir, "mid.csv", "t,x,y\n0,1,2\n10,1,2,3\n20,1,2\n30,1,2\n"))
+%!error <vn_readlog: ".*mid2.csv" line 4 has 2 fields, the header 3: "20,1"> vn_readlog (put (dir, "mid2.csv", "t,x,y\n0,1,2\n10,Bad,2\n20,1\n30,1,2\n"))
+
+%!test
+%! ## many unreadable entries in one block (more than the line-by-line
+%! ## mending takes), a line of blanks, and blanks around values
+%! n = 200;
+%! x = (1:n).';
+%! v = arrayfun (@(k) sprintf ("%d", k), x, "uniformoutput", false);
+%! v(3:3:end) = {"Bad"};
+%! v(50) = {" 50 "};
+%! txt = strjoin (cellfun (@(k, s) sprintf ("%d,%s,1\n", 10 * k, s), num2cell (x), v,
+%!                         "uniformoutput", false), "");
+%! txt = strrep (txt, "1000,", "   \n1000,");
+%! log = vn_readlog (put (dir, "many.csv", ["t,a,b\n", txt]));
+%! want = x;
+%! want(3:3:end) = NaN;
+%! assert (log.t, 10 * (x - 1));
+%! assert (log.a, want);
+%! assert (log.bad, [floor(n / 3), 0]);
+
+%!test
+%! ## random exports against a reader written here line by line (strsplit
+%! ## and a strict number pattern per field): delimiters, decimal commas,
+%! ## time stamp forms, and a mix of numbers, text and empty fields that
+%! ## sends blocks down every path of vn_readlog
+%! rand ("seed", 5);
+%! forms = {"- 5", "+", "-\t", "1e", "e5", "inf", "nan", "Infinity", "1d3", "0x1A", "12.5", "-3", "1e3", ".5", "7.", "+2.25", "Bad", "", "#N/A", ...
+%!          " 4 ", "1.2.3", "NaN", "-", "Comm Fail", "0", "-0.001"};
+%! for trial = 1:15
+%!   d = {",", ";", "\t"}{mod (trial, 3) + 1};
+%!   n = 20 + floor (rand () * 300);
+%!   ntag = 1 + floor (rand () * 5);
+%!   pbad = rand () ^ 3;
+%!   t = cumsum (1 + floor (rand (n, 1) * 30));
+%!   lines = cell (n, 1);
+%!   want = zeros (n, ntag);
+%!   for i = 1:n
+%!     f = cell (1, ntag);
+%!     for j = 1:ntag
+%!       if (rand () < pbad)
+%!         f{j} = forms{1 + floor (rand () * numel (forms))};
+%!         if (strcmp (d, "\t"))
+%!           f{j} = strrep (f{j}, "\t", " ");
+%!         endif
+%!       else
+%!         f{j} = sprintf ("%.4g", (rand () - 0.5) * 10 ^ floor (rand () * 6 - 2));
+%!       endif
+%!       s = strtrim (f{j});
+%!       if (isempty (regexp (s, '^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$', "once")))
+%!         want(i,j) = NaN;
+%!       else
+%!         want(i,j) = str2double (s);
+%!       endif
+%!       if (! strcmp (d, ","))
+%!         f{j} = strrep (f{j}, ".", ",");
+%!       endif
+%!     endfor
+%!     if (mod (trial, 5) == 0)
+%!       ts = sprintf ("%g", t(i) + 0.5);
+%!     elseif (mod (trial, 2))
+%!       ts = datestr (datenum (2026, 12, 31, 23, 0, 0) + t(i) / 86400, "yyyy-mm-dd HH:MM:SS");
+%!     else
+%!       ts = datestr (datenum (2026, 2, 28, 23, 0, 0) + t(i) / 86400, "dd.mm.yyyy HH:MM:SS");
+%!     endif
+%!     lines{i} = strjoin ([{ts}, f], d);
+%!   endfor
+%!   hdr = strjoin ([{"time"}, arrayfun(@(j) sprintf ("X%d [m]", j), 1:ntag, "uniformoutput", false)], d);
+%!   log = vn_readlog (put (dir, sprintf ("r%d.csv", trial), [hdr "\n" strjoin(lines, "\n") "\n"]));
+%!   assert (log.t, t - t(1));
+%!   assert (log.data, want, 1e-12);
+%!   assert (log.bad, sum (isnan (want), 1));
+%! endfor
