@@ -3,15 +3,18 @@
 # built by the top Makefile as BINDIR/NAME, whose last output line is
 # "N passed, N failed".
 #
-# Usage: tests/run_c_tests.sh BINDIR RESULTDIR
-# Writes RESULTDIR/tests__c__NAME.c.{log,res}; the .res line is
-# "PASSED FAILED SKIPPED FILE LOG NOTE" (see tools/sum_results.sh).
+# Usage: tests/run_c_tests.sh BINDIR RESULTDIR [LABEL]
+# Writes RESULTDIR/[LABEL__]tests__c__NAME.c.{log,res}; the .res line is
+# "PASSED FAILED SKIPPED FILE LOG NOTE" (see tools/sum_results.sh), FILE
+# being [LABEL:]tests/c/NAME.c.  LABEL names a second build of the same
+# programs ("sanitize"): a sanitizer report in the log is a failure.
 # A program that did not build, crashed, hung (TEST_TIMEOUT s, default 600),
 # exited non-zero or printed no summary line counts as at least one failure.
 set -euo pipefail
 
 bindir=${1:?usage: tests/run_c_tests.sh BINDIR RESULTDIR}
-resdir=${2:?usage: tests/run_c_tests.sh BINDIR RESULTDIR}
+resdir=${2:?usage: tests/run_c_tests.sh BINDIR RESULTDIR [LABEL]}
+label=${3:-}
 mkdir -p "$resdir"
 
 shopt -s nullglob
@@ -21,11 +24,12 @@ if [ "${#srcs[@]}" -eq 0 ]; then
   echo "c tests: no tests/c/*.c files found"
   exit 0
 fi
-echo "c tests: ${#srcs[@]} program(s)"
+echo "c tests${label:+ ($label)}: ${#srcs[@]} program(s)"
 
 for src in "${srcs[@]}"; do
   name=$(basename "$src" .c)
-  key=${src//\//__}
+  key=${label:+${label}__}${src//\//__}
+  shown=${label:+$label:}$src
   log="$resdir/$key.log"
   bin="$bindir/$name"
   p=0; f=0; note=""
@@ -57,7 +61,11 @@ for src in "${srcs[@]}"; do
       [ "$f" -gt 0 ] || f=1
     fi
   fi
-  echo "$p $f 0 $src $log $note" >"$resdir/$key.res"
+  if [ -s "$log" ] && grep -qE 'ERROR: (Address|Leak)Sanitizer|runtime error:' "$log"; then
+    note="sanitizer report ${note}"
+    [ "$f" -gt 0 ] || f=1
+  fi
+  echo "$p $f 0 $shown $log $note" >"$resdir/$key.res"
   if [ "$f" -gt 0 ]; then status="FAIL"; else status="ok  "; fi
-  printf '  %s %-40s %3d passed, %d failed %s\n' "$status" "$src" "$p" "$f" "$note"
+  printf '  %s %-40s %3d passed, %d failed %s\n' "$status" "$shown" "$p" "$f" "$note"
 done

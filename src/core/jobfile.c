@@ -277,6 +277,7 @@ int vn_job_parse (const unsigned char *buf, size_t len, vn_job_store *s,
   sp->taboff = ints (s, &c, sp->nunit);
   sp->tablen = ints (s, &c, sp->nunit);
   sp->tab = arr (s, &c, sizeof (double), 2 * ntab);
+  sp->ntab = ntab;
   j->sig_unit = ints (s, &c, j->nsig);
   j->sig_slot = ints (s, &c, j->nsig);
   j->sig_off = ints (s, &c, j->nsig);

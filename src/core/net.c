@@ -129,6 +129,28 @@ static int setup_globals (vn_net *net, const vn_spec *s)
   return VN_OK;
 }
 
+/* A unit's table must lie inside the spec's ntab pairs: the offset and
+ * count come from outside (a packed struct can be made by hand), so they
+ * are checked before anything is read through them. */
+static int check_table_span (vn_net *net, const vn_spec *s, int i)
+{
+  const vn_unit *u = &net->u[i];
+  if (!s->tablen || s->tablen[i] == 0)
+    return VN_OK;
+  int off = s->taboff ? s->taboff[i] : -1, len = s->tablen[i];
+  if (len < 0)
+    return vn_fail_unit (net, u, "table row count must be 0 or more, got "
+                         "%d", len);
+  if (s->ntab < 0)
+    return vn_fail (net, VN_EARG, "network: table length must be 0 or "
+                    "more pairs, got %ld", s->ntab);
+  if (!s->tab || off < 0 || (long) off + len > s->ntab)
+    return vn_fail_unit (net, u, "table rows %ld to %ld lie outside the "
+                         "%ld packed (level, volume) pairs", (long) off + 1,
+                         (long) off + len, s->tab ? s->ntab : 0L);
+  return VN_OK;
+}
+
 static int setup_units (vn_net *net, const vn_spec *s)
 {
   int np = 0;
@@ -150,6 +172,9 @@ static int setup_units (vn_net *net, const vn_spec *s)
         }
       u->poff = np;
       np += u->k->npar;
+      int st = check_table_span (net, s, i);
+      if (st)
+        return st;
       if (s->tablen && s->tablen[i] > 0)
         ntab += s->tablen[i];
     }

@@ -44,6 +44,10 @@ int vn_set_signals (vn_net *net, int nsig, const int *unit, const int *slot,
                                 "levels; signals may drive only inputs "
                                 "no switch or controller sets");
         }
+      if (off[i] < 0)
+        return vn_fail (net, VN_EARG, "signal %d on %s.%s: data offset %d "
+                        "is negative", i + 1, u->name,
+                        u->k->par[slot[i]].name, off[i]);
       if (len[i] < 1)
         return vn_fail (net, VN_EARG, "signal %d on %s.%s: it has no "
                         "points", i + 1, u->name, u->k->par[slot[i]].name);

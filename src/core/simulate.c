@@ -284,6 +284,18 @@ static double now (void)
   return ts.tv_sec + 1e-9 * ts.tv_nsec;
 }
 
+/* CVodeGetReturnFlagName hands back a string it malloc'ed (SUNDIALS 6.4,
+ * cvodes_io.c): copy it into the caller's buffer and free it, or every
+ * failure inside a fit loop leaks. */
+static const char *flag_name (int flag, char *buf, size_t len)
+{
+  char *s = CVodeGetReturnFlagName (flag);
+  snprintf (buf, len, "%s", s ? s : "unknown flag");
+  free (s);
+  return buf;
+}
+#define FLAG_NAME(flag) flag_name ((flag), (char[48]) {""}, 48)
+
 /* the state whose weighted local error is largest: where trouble is */
 static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
                       double t)
@@ -312,7 +324,7 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
                 net->u[u].name, N_VGetArrayPointer (y)[worst]);
     }
   vn_fail (net, VN_ESOLVER, "the integrator stopped at t = %.6g s (%s)%s%s",
-           t, CVodeGetReturnFlagName (flag), where,
+           t, FLAG_NAME (flag), where,
            flag == CV_TOO_MUCH_WORK ? "; the network may be very stiff or "
            "chattering: check valve and pump data, or raise maxsteps" : "");
   if (ele)
@@ -384,7 +396,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
     return st;
   if ((flag = restart (S, mem, *tr, y)) != CV_SUCCESS)
     return vn_fail (net, VN_ESOLVER, "simulate: restart after a switch at "
-                    "t = %g failed (%s)", *tr, CVodeGetReturnFlagName (flag));
+                    "t = %g failed (%s)", *tr, FLAG_NAME (flag));
   stats->restarts++;
   return VN_OK;
 }
@@ -445,34 +457,44 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   net->stop = opt.stop;
   net->stop_data = opt.stop_data;
 
+  /* Everything that needs freeing starts NULL, and every failure from
+   * here on leaves through `done', which frees it all. */
   double *bp = NULL;
   int nbp = 0;
-  int st = vn_breakpoints (net, tout[0], tout[nt - 1], &bp, &nbp);
-  if (st)
-    return st;
-
   sim S;
   memset (&S, 0, sizeof S);
   S.net = net;
   S.sens = sens;
   S.rec.nodes_only = 1;
+  if (sens)
+    sens->yrow = NULL;
+  SUNContext ctx = NULL;
+  N_Vector y = NULL;
+  SUNMatrix J = NULL;
+  SUNLinearSolver LS = NULL;
+  void *mem = NULL;
+  double t0w = now ();
+  int flag;
+  int st = vn_breakpoints (net, tout[0], tout[nt - 1], &bp, &nbp);
+  if (st)
+    goto done;
+
   if (opt.nyrec > 0)
     {
       S.rec.unit = malloc ((size_t) opt.nyrec * sizeof *S.rec.unit);
       if (!S.rec.unit)
         {
-          free (bp);
-          return VN_ENOMEM;
+          st = vn_fail (net, VN_ENOMEM, "simulate: out of memory");
+          goto done;
         }
       for (int j = 0; j < opt.nyrec; j++)
         {
           int yi = opt.yrec[j], u = -1;
           if (yi < 0 || yi >= net->ny)
             {
-              free (bp);
-              free (S.rec.unit);
-              return vn_fail (net, VN_EARG, "simulate: recorded output %d "
-                              "has index %d outside the network", j + 1, yi);
+              st = vn_fail (net, VN_EARG, "simulate: recorded output %d "
+                            "has index %d outside the network", j + 1, yi);
+              goto done;
             }
           u = vn_output_unit (net, yi);
           S.rec.unit[j] = u;
@@ -486,18 +508,17 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       for (int i = 0; i < sens->np; i++)
         if (sens->pidx[i] < 0 || sens->pidx[i] >= net->np)
           {
-            free (bp);
-            return vn_fail (net, VN_EARG, "simulate: sensitivity parameter "
-                            "%d has index %d outside the network", i + 1,
-                            sens->pidx[i]);
+            st = vn_fail (net, VN_EARG, "simulate: sensitivity parameter "
+                          "%d has index %d outside the network", i + 1,
+                          sens->pidx[i]);
+            goto done;
           }
       sens->yrow = malloc ((size_t) (net->ny + 1) * sizeof *sens->yrow);
       S.ycache = malloc ((size_t) net->nx * sizeof *S.ycache);
       if (!sens->yrow || !S.ycache)
         {
-          free (bp);
-          free (S.ycache);
-          return VN_ENOMEM;
+          st = vn_fail (net, VN_ENOMEM, "simulate: out of memory");
+          goto done;
         }
       for (int j = 0; j < net->ny; j++)
         sens->yrow[j] = -1;
@@ -505,11 +526,10 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
         {
           if (sens->yout[j] < 0 || sens->yout[j] >= net->ny)
             {
-              free (bp);
-              free (S.ycache);
-              return vn_fail (net, VN_EARG, "simulate: sensitivity output "
-                              "%d has index %d outside the network", j + 1,
-                              sens->yout[j]);
+              st = vn_fail (net, VN_EARG, "simulate: sensitivity output "
+                            "%d has index %d outside the network", j + 1,
+                            sens->yout[j]);
+              goto done;
             }
           sens->yrow[sens->yout[j]] = j;
         }
@@ -519,9 +539,9 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
     S.nsw += net->u[i].k == &vn_kind_switch;
   if (S.nsw > 64)
     {
-      free (bp);
-      return vn_fail (net, VN_EARG, "simulate: at most 64 switches are "
-                      "supported, the network has %d", S.nsw);
+      st = vn_fail (net, VN_EARG, "simulate: at most 64 switches are "
+                    "supported, the network has %d", S.nsw);
+      goto done;
     }
   S.sw = malloc ((size_t) (S.nsw + 1) * sizeof *S.sw);
   S.scratch = malloc ((size_t) net->nx * sizeof *S.scratch);
@@ -538,24 +558,12 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   S.out.yb = malloc ((size_t) S.out.cap * (S.out.ny + 1) * sizeof (double));
   if (!S.sw || !S.scratch || !S.out.xb || !S.out.yb)
     {
-      free (bp);
-      free (S.sw);
-      free (S.scratch);
-      free (S.out.xb);
-      free (S.out.yb);
-      free (S.rec.unit);
-      return VN_ENOMEM;
+      st = vn_fail (net, VN_ENOMEM, "simulate: out of memory");
+      goto done;
     }
   for (int i = 0, j = 0; i < net->nu; i++)
     if (net->u[i].k == &vn_kind_switch)
       S.sw[j++] = i;
-  SUNContext ctx = NULL;
-  N_Vector y = NULL;
-  SUNMatrix J = NULL;
-  SUNLinearSolver LS = NULL;
-  void *mem = NULL;
-  st = VN_OK;
-  int flag;
 
   net->seg_end = nbp > 0 ? bp[0] : tout[nt - 1];
   if (SUNContext_Create (NULL, &ctx) != 0
@@ -592,7 +600,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       || (S.nsw && (flag = CVodeRootInit (mem, S.nsw, cv_root)) != CV_SUCCESS))
     {
       st = vn_fail (net, VN_ESOLVER, "simulate: setting up CVODES failed "
-                    "(%s)", CVodeGetReturnFlagName (flag));
+                    "(%s)", FLAG_NAME (flag));
       goto done;
     }
   if (solver == VN_SOLVER_DENSE)
@@ -620,7 +628,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
          != CV_SUCCESS)
     {
       st = vn_fail (net, VN_ESOLVER, "simulate: setting the linear solver "
-                    "failed (%s)", CVodeGetReturnFlagName (flag));
+                    "failed (%s)", FLAG_NAME (flag));
       goto done;
     }
 
@@ -643,12 +651,12 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
         {
           st = vn_fail (net, VN_ESOLVER, "simulate: setting up the "
                         "sensitivities failed (%s)",
-                        CVodeGetReturnFlagName (flag));
+                        FLAG_NAME (flag));
           goto done;
         }
       store_sens (&S, 0, nt, tout[0], x0);
     }
-  double t0w = now ();
+  t0w = now ();
   double t = tout[0];
   int k = 1, b = 0, rooted;
   while (k < nt)
@@ -683,7 +691,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
           if ((flag = restart (&S, mem, seg, y)) != CV_SUCCESS)
             {
               st = vn_fail (net, VN_ESOLVER, "simulate: restart at t = %g "
-                            "failed (%s)", seg, CVodeGetReturnFlagName (flag));
+                            "failed (%s)", seg, FLAG_NAME (flag));
               goto stats;
             }
           stats->restarts++;

@@ -61,8 +61,9 @@ typedef struct vn_spec {
   const double *par;          /* npmax per unit, column per unit */
   const unsigned char *given; /* same layout: 1 where the user gave it */
   const double *tab;          /* all tables, (level, volume) pairs */
+  long ntab;                  /* pairs in tab: every table lies inside */
   const int *taboff;          /* nunit offsets in pairs */
-  const int *tablen;          /* nunit pair counts */
+  const int *tablen;          /* nunit pair counts (0 = no table) */
   double gravity, density, cp, ambient, smooth;
   int thermal;
   int nspecies;

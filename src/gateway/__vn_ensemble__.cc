@@ -168,10 +168,7 @@ DEFUN_DLD (__vn_ensemble__, args, ,
   double wall = std::chrono::duration<double> (std::chrono::steady_clock::now ()
                                                - t0).count ();
   if (st == VN_EINTR)
-    {
-      octave_quit ();
-      error_with_id ("vesselnet:interrupted", "%s: %s", FN, err);
-    }
+    vn_gw_interrupted (FN, err);
   if (st)
     error_with_id (st == VN_EARG ? "Octave:invalid-input-arg"
                    : "vesselnet:core", "%s: %s", FN, err);

@@ -48,7 +48,7 @@ static inline int vt_done (void)
 }
 
 /* ---- network builder ---- */
-#define VT_MAXU 32
+#define VT_MAXU 160
 #define VT_MAXTAB 256
 
 typedef struct vt_net {
@@ -136,6 +136,7 @@ static inline int vt_build (vt_net *b, vn_net **net)
   b->spec.par = b->par;
   b->spec.given = b->given;
   b->spec.tab = b->tab;
+  b->spec.ntab = b->ntab;
   b->spec.taboff = b->taboff;
   b->spec.tablen = b->tablen;
   b->msg[0] = 0;
