@@ -50,15 +50,15 @@
 ## @item L, magnitude, phase
 ## open-loop response @code{sign * G(jw) C(jw)} on the grid, phase in
 ## degrees unwrapped.
-## @item gm, gm_db
+## @item gain_margin, gain_margin_db
 ## gain margin @code{1/|L|} at the phase crossover, absolute and in dB;
 ## Inf when the phase never crosses -180 degrees on the grid.  With
 ## several crossovers the smallest margin is kept.
-## @item pm
+## @item phase_margin
 ## phase margin @code{180 + phase (L)} at the gain crossover (degrees,
 ## wrapped into -180..180); Inf when |L| never crosses 1 on the grid; the
 ## smallest over several crossovers.
-## @item wpc, wgc
+## @item phase_crossover, gain_crossover
 ## phase and gain crossover frequencies (rad/s) of the reported margins,
 ## refined on the exact response; NaN when there is none.
 ## @item action, input, output, controller
@@ -389,11 +389,11 @@ function lp = loop_margins (A, b, c, d, w, g, pid)
   lp.L = L;
   lp.magnitude = mag;
   lp.phase = ph;
-  lp.gm = gm;
-  lp.gm_db = 20 * log10 (gm);
-  lp.pm = pm;
-  lp.wgc = wgc;
-  lp.wpc = wpc;
+  lp.gain_margin = gm;
+  lp.gain_margin_db = 20 * log10 (gm);
+  lp.phase_margin = pm;
+  lp.gain_crossover = wgc;
+  lp.phase_crossover = wpc;
 endfunction
 
 ## Controller response at s, with the gain's magnitude.
@@ -459,7 +459,7 @@ endfunction
 %! fr = vn_frequency (lin, "controller", struct ("Kc", 0.02, "Ti", 600));
 %! printf ("gain %g m per m3/s at %g rad/s\n", fr.magnitude(1), fr.w(1));
 %! printf ("phase margin %.1f deg at %.4g rad/s, gain margin %.2f (%s action)\n",
-%!         fr.loop.pm, fr.loop.wgc, fr.loop.gm, fr.loop.action);
+%!         fr.loop.phase_margin, fr.loop.gain_crossover, fr.loop.gain_margin, fr.loop.action);
 
 %!test
 %! ## First order K/(tau s + 1) at w = 1/tau: K/sqrt(2), -45 deg (analytic).
@@ -471,15 +471,15 @@ endfunction
 
 %!test
 %! ## Integrator 1/s with ideal PI Kc 1, Ti 1: |L| = 1 where w^4 = w^2 + 1,
-%! ## so wgc^2 = (1 + sqrt 5)/2 and pm = atan (wgc) (analytic).
+%! ## so wc^2 = (1 + sqrt 5)/2 and the phase margin is atan (wc) (analytic).
 %! lin = struct ("A", 0, "B", 1, "C", 1, "D", 0, "inputs", {{"F1.flow"}},
 %!               "outputs", {{"T1.level"}});
 %! fr = vn_frequency (lin, "controller", struct ("Kc", 1, "Ti", 1));
 %! wc = sqrt ((1 + sqrt (5)) / 2);
-%! assert (fr.loop.wgc, wc, 1e-9);
-%! assert (fr.loop.pm, atand (wc), 1e-7);
-%! assert (fr.loop.gm, Inf);
-%! assert (isnan (fr.loop.wpc));
+%! assert (fr.loop.gain_crossover, wc, 1e-9);
+%! assert (fr.loop.phase_margin, atand (wc), 1e-7);
+%! assert (fr.loop.gain_margin, Inf);
+%! assert (isnan (fr.loop.phase_crossover));
 %! assert (fr.loop.action, "reverse");
 
 %!test
@@ -488,9 +488,9 @@ endfunction
 %! A = [-1 1 0; 0 -1 1; 0 0 -1];
 %! lin = struct ("A", A, "B", [0; 0; 1], "C", [-1 0 0], "D", 0);
 %! fr = vn_frequency (lin, "controller", struct ("Kc", -2));
-%! assert (fr.loop.wpc, sqrt (3), 1e-9);
-%! assert (fr.loop.gm, 4, 1e-9);
-%! assert (fr.loop.gm_db, 20 * log10 (4), 1e-8);
+%! assert (fr.loop.phase_crossover, sqrt (3), 1e-9);
+%! assert (fr.loop.gain_margin, 4, 1e-9);
+%! assert (fr.loop.gain_margin_db, 20 * log10 (4), 1e-8);
 %! assert (fr.loop.action, "direct");
 
 %!warning <positive feedback>

@@ -36,7 +36,9 @@
 ## respect to the input, as two @code{vn_steady} operating points give.
 ## @item num, den, zeros
 ## for one input and one output: the transfer function's coefficients in
-## descending powers of s and its zeros; [] otherwise.
+## descending powers of s and its zeros; [] otherwise.  Built on the
+## states the input reaches and that reach the output only, so a state
+## outside them (an idle tank) adds no common factor to both.
 ## @item op
 ## the operating point given.
 ## @item note
@@ -162,7 +164,12 @@ function lin = vn_linearize (net, op, inputs, outputs, varargin)
   lin.den = [];
   lin.zeros = [];
   if (numel (inputs) == 1 && numel (outputs) == 1 && opt.poles)
-    [lin.num, lin.den, lin.zeros] = lin_polynomials (full (A), B, C, D);
+    ## on the states the input reaches and that reach the output: a state
+    ## outside (an idle catch tank) would only add a common factor to
+    ## numerator and denominator
+    k = lin_reach (A, B) & lin_reach (A.', C.');
+    [lin.num, lin.den, lin.zeros] = lin_polynomials (full (A(k,k)), B(k),
+                                                     C(k), D);
   endif
   lin.op = op;
 

@@ -16,25 +16,41 @@
 ## @qcode{"UNIT.VARIABLE"} names, e.g. @code{@{"T1.level", "T2.level"@}};
 ## default: every tank level) against time.  Quantities with the same
 ## unit of measure share an axes; the axes are stacked over one time axis,
-## each labelled with its unit of measure and with a legend of the names.
+## each labelled with its variable and unit (@qcode{"level (m)"};
+## dimensionless quantities @qcode{"opening (fraction)"}).  A controller's
+## set point is drawn over the quantity it measures.
 ## @item a step response @var{sr} (@code{vn_stepresponse}: fields @code{t},
 ## @code{nonlinear}, @code{linear}, @code{outputs}, @code{input},
 ## @code{size}, @code{metrics})
-## one axes per output: the nonlinear response solid, the linear one
-## dashed, the point at 63.2 % of the final change and the settling time
-## (from @code{metrics}, fields @code{t63} and @code{settle}, times from the
-## step) marked by small triangles and written in a note.
-## @item a frequency response @var{fr} (@code{vn_frequency}: fields
-## @code{w}, @code{magnitude}, @code{phase})
-## magnitude on log-log axes over phase (deg) on semilog axes, one line
-## per input/output pair, against frequency in rad/s.
-## @item a fit against data @var{est} (field @code{fit})
-## per experiment @var{k} a column: measured values as markers and the
-## model as lines, the residuals (measured - predicted) in a small axes
-## below.  Contract: @code{est.fit(k).t} (times, s), @code{.names}
-## (cellstr of ny quantities), @code{.measured} and @code{.predicted}
-## (nt x ny), optional @code{.units} (cellstr) and @code{.name} (label).
+## one axes per output (the change, with its unit): the nonlinear response
+## solid, the linear one dashed, the point at 63.2 % of the final change
+## and the settling time marked by small triangles; beside the axes a
+## table of the metrics (final change, dead time, t63, settling time,
+## overshoot) in the axis's time unit.  A response that does not settle
+## away from zero (@code{metrics.settles} false) says so, without times.
+## @item a frequency response @var{fr} (@code{vn_frequency}) or a linear
+## model (drawn through @code{vn_frequency})
+## one pair: magnitude on log-log axes over phase (deg); several pairs: a
+## grid of small panels, a column per input and a row per output, with
+## the same scales in every panel; with a controller (@code{fr.loop}) the
+## open loop L with its gain and phase margins marked and labelled.
+## @item a fit against data @var{est} (field @code{fit}) or a validation
+## (@code{vn_validate})
+## per experiment @var{k} a column, in it per output a panel of the
+## measured values (markers) and the model (line), censored readings as
+## large rings, and below it the residuals (measured - predicted) as a
+## line against time.  Contract: @code{est.fit(k).t} (times, s),
+## @code{.names} (cellstr of ny quantities), @code{.measured} and
+## @code{.predicted} (nt x ny), optional @code{.censored} (logical nt x
+## ny), @code{.units} (cellstr) and @code{.name} (label).
+## @item an ensemble (@code{vn_ensemble})
+## per quantity the median, the 5 % and 95 % percentiles and the mean.
 ## @end table
+##
+## Legends, and the tables of metrics or margins, sit beside the axes,
+## outside the data.  Values are shown in the units the network's
+## @qcode{"display"} option asks for (the network of the result, or
+## option @qcode{"net"}).
 ##
 ## Lines are black and told apart by line style (solid, dashed, dotted,
 ## dash-dot) and by markers at about ten points, so that a figure reads
@@ -56,6 +72,9 @@
 ## @qcode{"auto"} (default: s up to 20 min, min up to 5 h, h beyond).
 ## @item @qcode{"color"}
 ## true to draw the lines in colour as well (default false).
+## @item @qcode{"net"}
+## the network whose display units to use, for results that do not carry
+## it.
 ## @end table
 ##
 ## Without a display (the DISPLAY variable empty, as under octave-cli in
@@ -110,10 +129,23 @@ function h = vn_plot (s, varargin)
       case "step"
         ax = plot_step (hf, s, opt);
         deftitle = step_title (s);
-      case "frequency"
+      case {"frequency", "linear"}
+        if (strcmp (kind, "linear"))
+          s = vn_frequency (s);
+        endif
         ax = plot_freq (hf, s, opt);
-        deftitle = "frequency response";
+        deftitle = "";
+        if (numel (s.magnitude(1,:)) == 1 && ! isfield (s, "loop"))
+          deftitle = "frequency response";
+        endif
+      case "ensemble"
+        ax = plot_ensemble (hf, s, opt);
+        deftitle = "";
       case "fit"
+        if (isempty (opt.net) && isfield (s, "net") && isstruct (s.net)
+            && isfield (s.net, "units"))
+          opt.net = s.net;
+        endif
         if (isfield (s.fit, "censored")
             && any (cellfun (@(c) any (c(:)), {s.fit.censored})))
           ax = plot_validate (hf, s.fit, opt);   # censored readings ringed
@@ -189,7 +221,7 @@ endfunction
 
 %!shared res, t, dax
 %! ## Data axes of a figure (a legend is an axes too, holding copies).
-%! dax = @(h) findobj (h, "type", "axes", "-not", "tag", "legend");
+%! dax = @(h) findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! ## Fake result of an hour: two levels (m) and one flow (m3/s).
 %! t = (0:10:3600)';
 %! res.t = t;
@@ -202,7 +234,7 @@ endfunction
 %!test
 %! ## Quantities sharing a unit share an axes: 2 units -> 2 axes.
 %! h = vn_plot (res, {"T1.level", "O1.flow", "T2.level"});
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (numel (ax), 2);
 %! labels = sort (cellfun (@(a) get (get (a, "ylabel"), "string"), num2cell (ax),
 %!                         "uniformoutput", false));
@@ -247,25 +279,29 @@ endfunction
 %! r = res;
 %! r.t = t / 6;
 %! h = vn_plot (r, "T1.level");
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (get (get (ax(1), "xlabel"), "string"), "time (s)");
 %! assert (get (ax(1), "xlim"), [0 600], 1e-12);
 %! r.t = t * 10;
 %! vn_plot (r, "T1.level", "figure", h);
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (get (get (ax(1), "xlabel"), "string"), "time (h)");
 %! assert (get (ax(1), "xlim"), [0 10], 1e-12);
 %! h2 = vn_plot (r, "T1.level", "figure", h, "time", "s");
 %! assert (h2, h);
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (get (ax(1), "xlim"), [0 36000], 1e-9);
 %! close (h);
 
 %!test
 %! ## Legend lists the quantity names.
 %! h = vn_plot (res, {"T1.level", "T2.level"});
-%! lg = findobj (h, "type", "axes", "tag", "legend");
-%! assert (get (lg, "string"), {"T1.level", "T2.level"});
+%! lg = findobj (h, "type", "axes", "tag", "vn_legend");
+%! assert (get (lg, "userdata"), {"T1.level", "T2.level"});
+%! ## outside the data: right of the axes it belongs to
+%! pa = get (dax (h), "position");
+%! pl = get (lg, "position");
+%! assert (pl(1) >= pa(1) + pa(3));
 %! close (h);
 
 %!test
@@ -303,8 +339,15 @@ endfunction
 %! ## Nonlinear solid, linear dashed.
 %! full = findobj (dax (h), "type", "line", "marker", "none");
 %! assert (sort (get (full, "linestyle")), sort ({"-"; "--"}));
-%! note = get (findobj (h, "type", "text", "units", "normalized"), "string");
-%! assert (any (strcmp (note, "63.2 % at 300 s, settled at 1174 s")));
+%! ## metrics beside the axes, times in the axis's unit
+%! note = get (findobj (h, "tag", "metrics"), "string");
+%! assert (any (strcmp (note, "t63       300 s")));
+%! assert (any (strcmp (note, "settled   1174 s")));
+%! assert (any (strcmp (note, "final     0.004")));
+%! ## in minutes on an axis in minutes
+%! vn_plot (sr, "time", "min", "figure", h);
+%! note = get (findobj (h, "tag", "metrics"), "string");
+%! assert (any (strcmp (note, "t63       5 min")));
 %! close (h);
 
 %!test
@@ -316,9 +359,9 @@ endfunction
 %! sr = struct ("t", tt, "nonlinear", y, "linear", [], "outputs", {{"T1.level", "T2.level"}},
 %!              "input", "F1.flow", "size", 1, "metrics", m);
 %! h = vn_plot (sr);
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (numel (ax), 2);
-%! txt = get (findobj (h, "type", "text", "units", "normalized"), "string");
+%! txt = get (findobj (h, "tag", "metrics"), "string");
 %! assert (any (strcmp (txt, "not settled")));
 %! close (h);
 
@@ -332,7 +375,7 @@ endfunction
 %!              "phase", angle (G) * 180 / pi, "inputs", {{"F1.flow"}},
 %!              "outputs", {{"T1.level"}});
 %! h = vn_plot (fr);
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (numel (ax), 2);
 %! assert (get (ax, "xscale"), {"log"; "log"});
 %! assert (sort (get (ax, "yscale")), {"linear"; "log"});
@@ -345,8 +388,8 @@ endfunction
 %! ## Phase 0 to -88 deg: ticks every 45 deg from -90 to 0.
 %! pa = ax(strcmp (get (ax, "yscale"), "linear"));
 %! assert (get (pa, "ytick"), [-90 -45 0]);
-%! lg = findobj (h, "type", "axes", "tag", "legend");
-%! assert (get (lg, "string"), {"F1.flow to T1.level"});
+%! lg = findobj (h, "type", "axes", "tag", "vn_legend");
+%! assert (get (lg, "userdata"), {"F1.flow to T1.level"});
 %! close (h);
 
 ## ---- fit against data ------------------------------------------------
@@ -361,14 +404,118 @@ endfunction
 %!                   "measured", {ym, 2 - ym}, "predicted", {yp, 2 - yp},
 %!                   "units", {{"m"}, {"m"}});
 %! h = vn_plot (est, "title", "check");
-%! ax = findobj (h, "type", "axes", "-not", "tag", "legend");
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! assert (numel (ax), 4);
-%! r = findobj (dax (h), "type", "line", "markersize", 4);
+%! ## residuals as a line against time
+%! r = findobj (dax (h), "tag", "residual");
+%! assert (get (r, "linestyle"), {"-"; "-"});
 %! res2 = sort (cell2mat (get (r, "ydata")), 1);
 %! assert (res2, sort ([0.01 * sin(tt' / 37); -0.01 * sin(tt' / 37)], 1), 1e-12);
 %! ## Data as markers without line.
-%! d = findobj (dax (h), "type", "line", "markersize", 5);
+%! d = findobj (dax (h), "type", "line", "markersize", 4);
 %! assert (get (d, "linestyle"), {"none"; "none"});
+%! ## units on the axes
+%! yl = cellfun (@(a) get (get (a, "ylabel"), "string"), num2cell (dax (h)), "uniformoutput", false);
+%! assert (sum (strcmp (yl, "T1.level (m)")), 2);
+%! assert (sum (strcmp (yl, "residual (m)")), 2);
+%! close (h);
+
+## ---- setpoints, dimensionless axes, display units ----------------------
+
+%!test
+%! ## A set point is drawn over the level its controller measures; an
+%! ## opening is labelled "fraction"; levels in mm as the network asks.
+%! net = vn_network ("sp", "display", {"level", "mm"});
+%! net = vn_tank (net, "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 60, "opening", 0.5);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
+%!                      "LV1.opening", "setpoint", 1, "gain", 1, "reset", 300, ...
+%!                      "limits", [0 1]);
+%! r = vn_simulate (net, [0 600], [], "dt", 10);
+%! h = vn_plot (r, {"T1.level", "LV1.opening"});
+%! ax = dax (h);
+%! yl = cellfun (@(a) get (get (a, "ylabel"), "string"), num2cell (ax), "uniformoutput", false);
+%! assert (sort (yl), sort ({"level (mm)"; "opening (fraction)"}));
+%! lev = ax(strcmp (yl, "level (mm)"));
+%! lg = findobj (h, "tag", "vn_legend");
+%! names = get (lg, "userdata");
+%! assert (any (cellfun (@(c) isequal (c, {"T1.level", "LC1.setpoint"}), names)));
+%! y = get (findobj (lev, "type", "line", "marker", "none", "linestyle", "--"), "ydata");
+%! assert (y, 1000 * ones (size (y)), 1e-9);
+%! close (h);
+
+## ---- frequency grid and loop --------------------------------------------
+
+%!test
+%! ## 2 inputs x 2 outputs: a grid of magnitude and phase panels with the
+%! ## same scales everywhere
+%! w = logspace (-3, 0, 31)';
+%! G = zeros (31, 2, 2);
+%! G(:,1,1) = 1 ./ (1i * w * 10 + 1);   G(:,2,1) = 5 ./ (1i * w * 100 + 1);
+%! G(:,1,2) = 0.1 ./ (1i * w + 1);      G(:,2,2) = 2 ./ (1i * w * 30 + 1) .^ 2;
+%! fr = struct ("w", w, "response", G, "magnitude", abs (G),
+%!              "phase", unwrap (angle (G)) * 180 / pi,
+%!              "inputs", {{"F1.flow", "LV1.opening"}}, "outputs", {{"T1.level", "T2.level"}});
+%! h = vn_plot (fr);
+%! ax = findobj (h, "type", "axes", "-not", "tag", "vn_legend", "-not", "tag", "note");
+%! assert (numel (ax), 8);
+%! mag = ax(strcmp (get (ax, "yscale"), "log"));
+%! assert (numel (mag), 4);
+%! assert (size (unique (cell2mat (get (mag, "ylim")), "rows"), 1), 1);
+%! ph = ax(strcmp (get (ax, "yscale"), "linear"));
+%! assert (size (unique (cell2mat (get (ph, "ylim")), "rows"), 1), 1);
+%! t = cellfun (@(a) get (get (a, "title"), "string"), num2cell (ax), "uniformoutput", false);
+%! assert (sort (t(! cellfun (@isempty, t))), {"from F1.flow"; "from LV1.opening"});
+%! close (h);
+
+%!test
+%! ## The loop L of a lag 2/(10 s + 1)^3 under P control Kc = 2: phase
+%! ## crossover where atan (10 w) = 60 deg, w = sqrt (3)/10; |L| there
+%! ## = 4/8, gain margin 2 (analytic); both margins marked and labelled.
+%! lin = struct ("A", [-0.1 0 0; 0.1 -0.1 0; 0 0.1 -0.1], "B", [0.2; 0; 0],
+%!               "C", [0 0 1], "D", 0, "inputs", {{"F1.flow"}}, "outputs", {{"T1.level"}});
+%! fr = vn_frequency (lin, "controller", struct ("Kc", 2, "Ti", Inf));
+%! assert (fr.loop.gain_margin, 2, 1e-9);
+%! h = vn_plot (fr);
+%! gm = findobj (h, "type", "line", "tag", "gain margin");
+%! assert (get (gm, "xdata"), [1 1] * sqrt (3) / 10, 1e-9);
+%! assert (get (gm, "ydata"), [0.5 1], 1e-9);
+%! pm = findobj (h, "type", "line", "tag", "phase margin");
+%! assert (get (pm, "xdata"), [1 1] * fr.loop.gain_crossover, 1e-12);
+%! txt = get (findobj (h, "type", "text", "tag", "gain margin"), "string");
+%! assert (strtrim (txt), "GM 6.0 dB");
+%! txt = get (findobj (h, "type", "text", "tag", "phase margin"), "string");
+%! assert (strtrim (txt), sprintf ("PM %.1f deg", fr.loop.phase_margin));
+%! close (h);
+
+## ---- censored readings, ensembles ------------------------------------------
+
+%!test
+%! tt = (0:10:100)';
+%! est.fit = struct ("t", tt, "names", {{"T1.level", "T2.level"}},
+%!                   "measured", [tt / 100, 3 - tt / 100], "predicted", [tt / 100, 3 - tt / 100],
+%!                   "censored", [tt > 85, false(11, 1)], "units", {{"m", "m"}});
+%! h = vn_plot (est);
+%! assert (numel (dax (h)), 4);
+%! ring = findobj (dax (h), "tag", "censored");
+%! assert (get (ring, "xdata"), [90 100]);
+%! r = get (findobj (dax (h), "tag", "residual"), "ydata");
+%! assert (sum (cellfun (@(v) sum (isnan (v)), r)), 2);
+%! close (h);
+
+%!test
+%! t = (0:60:600)';
+%! y = reshape (1 + t / 600 * linspace (0.9, 1.1, 9), [11 1 9]);
+%! q = prctile (y, [5 50 95], 3);
+%! ens = struct ("t", t, "names", {{"T1.level"}}, "units", {{"m"}}, "y", y,
+%!               "params", (1:9)', "failed", struct ("run", {}, "message", {}),
+%!               "mean", mean (y, 3), "p05", q(:,:,1), "p50", q(:,:,2), "p95", q(:,:,3));
+%! h = vn_plot (ens);
+%! ax = dax (h);
+%! assert (numel (ax), 1);
+%! assert (get (get (ax, "ylabel"), "string"), "T1.level (m)");
+%! assert (get (findobj (h, "tag", "vn_legend"), "userdata"), {"median", "5 % and 95 %", "mean"});
 %! close (h);
 
 ## ---- errors ----------------------------------------------------------

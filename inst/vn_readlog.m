@@ -17,7 +17,8 @@
 ## "," ";" or a tab, detected from the header (tab before ";" before
 ## ",").  With ";" or tabs a decimal comma is accepted ("36,2").  Double
 ## quotes around fields are dropped.  A delimiter at the end of every line
-## is allowed.
+## is allowed.  The text is UTF-8 (a byte order mark is skipped) or
+## Latin-1; UTF-16 ("Unicode text" of spreadsheets) is refused.
 ## @item Time stamps
 ## ISO 8601 with a space or "T" between date and time and optional
 ## fractional seconds ("2026-03-04 06:00:00", "2026-03-04T06:00:00.250",
@@ -109,13 +110,25 @@ function log = read_all (fid, where)
   pieces = {};
   first = true;
   last = [];          # time and line of the last row read
+  cr = false;         # lines end in a carriage return alone
   while (true)
     [b, n] = fread (fid, blk, "*char");
     atend = n < blk;
     c = [rest, b.'];
+    if (first && isempty (strfind (c, "\n")) && ! isempty (strfind (c, "\r")))
+      cr = true;
+    endif
+    if (cr)
+      c(c == "\r") = "\n";
+    endif
     if (first)
       if (numel (c) >= 3 && all (double (c(1:3)) == [239 187 191]))
         c(1:3) = [];  # UTF-8 byte order mark
+      elseif (numel (c) >= 2 && (all (double (c(1:2)) == [255 254])
+                                 || all (double (c(1:2)) == [254 255])))
+        error ("Octave:invalid-input-arg",
+               ["%s: the file is UTF-16 text (\"Unicode text\"); save it ", ...
+                "as UTF-8 or plain text (CSV) and read that"], where);
       endif
     endif
     if (atend)
@@ -371,8 +384,9 @@ function [p, last] = parse_block (c, hdr, line0, where, last)
 endfunction
 
 ## Go on from where sscanf stopped, one cleaned line at a time, at most
-## 32 times per block; then, or when lines and rows do not match (a line
-## of blanks that sscanf skipped), read the rest by slow_block.
+## 150 times per block (each costs a copy of the rest of the block); then,
+## or when lines and rows do not match (a line of blanks that sscanf
+## skipped), read the rest by slow_block.
 function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
   nl = find (c == "\n");
   st = [1, nl(1:end-1) + 1];
@@ -382,7 +396,7 @@ function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
   rows = zeros (m, np);
   keep = true (1, m);
   r = 1;
-  for fails = 0:32
+  for fails = 0:150
     nfull = min (floor (cnt / np), m - r + 1);
     rows(r:r+nfull-1,:) = reshape (v(1:nfull*np), np, nfull).';
     r += nfull;
@@ -410,7 +424,7 @@ function [rows, lineno] = mend_block (c, hdr, line0, where, v, cnt)
     r += 1;
     if (r > m)
       break;
-    elseif (fails >= 32)
+    elseif (fails >= 150)
       ## the rest of the block, read carefully
       done = find (keep(1:r-1));
       [rest, lrest] = slow_block (c(st(ne(r)):end), hdr, line0 + ne(r) - 1,

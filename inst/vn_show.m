@@ -1,24 +1,34 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {} vn_show (@var{net})
-## @deftypefnx {} {@var{s} =} vn_show (@var{net})
+## @deftypefnx {} {} vn_show (@var{net}, @qcode{"all"}, true)
+## @deftypefnx {} {@var{s} =} vn_show (@dots{})
 ## Print a readable summary of a network.
 ##
 ## Shows the network's name and options, then one row per unit in
 ## declaration order: name, kind, where it takes from and delivers to, and
-## the parameters given, with their units of measure.  A last list gives
-## the inputs that signals may drive (feed flows, valve openings, pump
-## speeds, boundary heads) with their present values.  With an output the
-## summary is returned as a char row (lines joined by newlines) instead of
+## the parameters given, with their units of measure (in the units the
+## network's @qcode{"display"} option asks for, see @code{vn_network}).  A
+## controller shows its action once, its limits as @code{[lo hi]} and its
+## gain in output unit per measured unit.  A last list gives the inputs
+## that signals may drive (feed flows, valve openings, pump speeds,
+## boundary heads) with their present values.  With an output the summary
+## is returned as a char row (lines joined by newlines) instead of
 ## printed.
 ##
-## @seealso{vn_network, vn_tank, vn_simulate}
+## A network of more than 40 units is summarised: the counts of units by
+## kind, the first and the last units of the table and the first and last
+## inputs, and where to look for the rest.  Option @qcode{"all"}, true
+## lists every unit and input.
+##
+## @seealso{vn_network, vn_tank, vn_simulate, vn_report}
 ## @end deftypefn
 
-function s = vn_show (net)
-  if (nargin != 1)
+function s = vn_show (net, varargin)
+  if (nargin < 1)
     print_usage ();
   endif
   build_check_net ("vn_show", net);
+  all_units = show_options (varargin);
   o = net.options;
   lines = {sprintf(["network \"%s\": gravity %g m/s2, density %g kg/m3, ", ...
                     "cp %g J/(kg K), ambient %g degC, smooth %g m, thermal %s"],
@@ -33,26 +43,54 @@ function s = vn_show (net)
   endif
   U = net.units;
   n = numel (U);
+  ## head and tail of a long table; everything when asked
+  keep = 5;
+  brief = ! all_units && n > 40;
   lines{end+1} = sprintf ("%d unit%s", n, ifelse (n == 1, "", "s"));
+  if (brief)
+    lines{end} = [lines{end} ": " counts(U)];
+    rows_shown = [1:keep, n-keep+1:n];
+  else
+    rows_shown = 1:n;
+  endif
   if (n > 0)
     cols = {"name", "kind", "from -> to", "parameters"};
-    rowsc = cell (n, 4);
-    for i = 1:n
-      rowsc(i,:) = {U(i).name, U(i).kind, ends(U(i)), params(U(i))};
+    m = numel (rows_shown);
+    rowsc = cell (m, 4);
+    for r = 1:m
+      i = rows_shown(r);
+      rowsc(r,:) = {U(i).name, U(i).kind, ends(U(i)), params(net, U(i))};
     endfor
     w = max (cellfun (@numel, [cols; rowsc]), [], 1);
     fmt = sprintf ("  %%-%ds  %%-%ds  %%-%ds  %%s", w(1:3));
     lines{end+1} = sprintf (fmt, cols{:});
-    for i = 1:n
-      lines{end+1} = sprintf (fmt, rowsc{i,:});
+    for r = 1:m
+      if (brief && r == keep + 1)
+        lines{end+1} = sprintf ("  ... %d units not shown (units %d to %d)",
+                                n - 2 * keep, keep + 1, n - keep);
+      endif
+      lines{end+1} = sprintf (fmt, rowsc{r,:});
     endfor
     inp = inputs (net);
     if (! isempty (inp))
-      lines{end+1} = "inputs:";
-      wq = max (cellfun (@numel, inp(:,1)));
-      for i = 1:rows (inp)
-        lines{end+1} = sprintf ("  %-*s  %s", wq, inp{i,1}, inp{i,2});
+      ni = rows (inp);
+      lines{end+1} = sprintf ("inputs (%d):", ni);
+      shown = 1:ni;
+      if (brief && ni > 2 * keep)
+        shown = [1:keep, ni-keep+1:ni];
+      endif
+      wq = max (cellfun (@numel, inp(shown,1)));
+      for r = 1:numel (shown)
+        if (r == keep + 1 && numel (shown) < ni)
+          lines{end+1} = sprintf ("  ... %d inputs not shown", ni - 2 * keep);
+        endif
+        lines{end+1} = sprintf ("  %-*s  %s", wq, inp{shown(r),1}, inp{shown(r),2});
       endfor
+    endif
+    if (brief)
+      lines{end+1} = ["every unit and input: vn_show (net, \"all\", true); ", ...
+                      "one unit: net.units(k) (k from the table's order), ", ...
+                      "its parameters in net.units(k).par"];
     endif
   endif
   txt = strjoin (lines, "\n");
@@ -61,6 +99,35 @@ function s = vn_show (net)
   else
     printf ("%s\n", txt);
   endif
+endfunction
+
+function all_units = show_options (args)
+  all_units = false;
+  [names, vals] = vn_option_pairs (args, "vn_show");
+  for i = 1:numel (names)
+    switch (lower (names{i}))
+      case "all"
+        v = vals{i};
+        if (! (isscalar (v) && (islogical (v) || isnumeric (v)) && (v == 0 || v == 1)))
+          error ("Octave:invalid-input-arg",
+                 "vn_show: option \"all\" must be true or false");
+        endif
+        all_units = logical (v);
+      otherwise
+        error ("Octave:invalid-input-arg",
+               "vn_show: unknown option \"%s\"; allowed: all", names{i});
+    endswitch
+  endfor
+endfunction
+
+## "1200 tank, 799 orifice, 1 feed": counts by kind, in order of appearance.
+function s = counts (U)
+  [kinds, first, j] = unique ({U.kind}, "first");
+  [~, order] = sort (first);
+  n = accumarray (j(:), 1);
+  parts = arrayfun (@(k) sprintf ("%d %s", n(k), kinds{k}), order,
+                    "uniformoutput", false);
+  s = strjoin (parts, ", ");
 endfunction
 
 ## "from -> to" column; a tank shows where its spill goes.
@@ -86,10 +153,14 @@ function s = ends (u)
   endswitch
 endfunction
 
-## Parameters with units of measure; char options by name, codes omitted.
-function s = params (u)
+## Parameters with units of measure (display units); char options by
+## name, their codes omitted; a controller's limits as [lo hi].
+function s = params (net, u)
   parts = {};
   a = u.aux;
+  if (strcmp (u.kind, "controller") && ! isfield (a, "action"))
+    a.action = "reverse (default)";
+  endif
   f = fieldnames (a);
   for i = 1:numel (f)
     if (ischar (a.(f{i})))
@@ -97,15 +168,22 @@ function s = params (u)
     endif
   endfor
   ## Codes of char options, shown above by their names.
-  codes = {"shape", "shape"; "char", "characteristic"};
+  codes = {"shape", "shape"; "char", "characteristic"; "action", "action"};
   f = fieldnames (u.par);
   for i = 1:numel (f)
     k = find (strcmp (f{i}, codes(:,1)), 1);
     if (! isempty (k) && isfield (a, codes{k,2}))
       continue;
     endif
-    uom = unit_of (u.kind, f{i});
-    parts{end+1} = strtrim (sprintf ("%s %g %s", f{i}, u.par.(f{i}), uom));
+    if (any (strcmp (f{i}, {"lo", "hi"})) && all (isfield (u.par, {"lo", "hi"})))
+      if (strcmp (f{i}, "lo"))
+        [v, uom] = shown (net, u, "lo", [u.par.lo, u.par.hi]);
+        parts{end+1} = strtrim (sprintf ("limits [%g %g] %s", v, uom));
+      endif
+      continue;
+    endif
+    [v, uom] = shown (net, u, f{i}, u.par.(f{i}));
+    parts{end+1} = strtrim (sprintf ("%s %g %s", f{i}, v, uom));
   endfor
   if (! isempty (u.table))
     parts{end+1} = sprintf ("table %d points to %g m, %g m3", rows (u.table),
@@ -120,37 +198,14 @@ function s = params (u)
   s = strjoin (parts, ", ");
 endfunction
 
-## Unit of measure of a parameter, for display.
-function uom = unit_of (kind, name)
-  switch (name)
-    case {"diameter", "length", "height", "base", "rim", "crest", "level", ...
-          "outlet", "inlet", "head", "shutoff", "suction"}
-      uom = "m";
-    case "area"
-      uom = "m2";
-    case "volume"
-      uom = "m3";
-    case "flow"
-      uom = "m3/s";
-    case "coeff"
-      uom = "m2.5/s";
-    case "r"
-      uom = "s/m2";
-    case "kv"
-      uom = "m3/h";
-    case "k"
-      uom = "m/(m3/s)^2";
-    case {"lag", "reset", "rate"}
-      uom = "s";
-    case "ua"
-      uom = "W/K";
-    case "temperature"
-      uom = "degC";
-    case "duty"
-      uom = "W";
-    otherwise
-      uom = "";
-  endswitch
+## A parameter's value and unit as shown: the display unit the network
+## asks for; dimensionless values without a unit.
+function [v, uom] = shown (net, u, name, v)
+  si = report_unit (net, [u.name "." name], u);
+  [v, uom] = units_display (net, si, v, [u.name "." name]);
+  if (any (strcmp (uom, {"1", "conc"})))
+    uom = "";
+  endif
 endfunction
 
 ## Inputs signals may drive: {quantity, value text}; defaults are marked.
@@ -174,10 +229,11 @@ function inp = inputs (net)
     endif
     p = table{k,2};
     if (isfield (U(i).par, p))
-      val = strtrim (sprintf ("%g %s", U(i).par.(p), unit_of (U(i).kind, p)));
+      [v, uom] = shown (net, U(i), p, U(i).par.(p));
+      val = strtrim (sprintf ("%g %s", v, uom));
     elseif (! isnan (table{k,3}))
-      val = [strtrim(sprintf ("%g %s", table{k,3}, unit_of (U(i).kind, p))), ...
-             " (default)"];
+      [v, uom] = shown (net, U(i), p, table{k,3});
+      val = [strtrim(sprintf ("%g %s", v, uom)), " (default)"];
     else
       val = "(not set)";
     endif
@@ -251,9 +307,9 @@ endfunction
 %! assert (! isempty (regexp (s, "T1 +tank +spill -> T2 +shape prism, area 2 m2, rim 3 m, level 1.2 m")));
 %! assert (! isempty (regexp (s, "O1 +orifice +T1 -> T2 +coeff 0.015 m2.5/s")));
 %! assert (! isempty (regexp (s, "LV1 +valve +T2 -> \\(free discharge\\) +characteristic equal, kv 40 m3/h, opening 0.5")));
-%! assert (! isempty (regexp (s, "P1 +pump +T2 -> river +shutoff 25 m, k 40000 m/\\(m3/s\\)\\^2")));
+%! assert (! isempty (regexp (s, "P1 +pump +T2 -> river +shutoff 25 m, k 40000 m/\\(m3/s\\)2")));
 %! assert (! isempty (regexp (s, "F1 +feed +-> T1 +flow 0.02 m3/s")));
-%! assert (! isempty (regexp (s, "inputs:\n  F1.flow +0.02 m3/s\n  LV1.opening +0.5\n  river.head +4 m\n  P1.speed +1 \\(default\\)")));
+%! assert (! isempty (regexp (s, "inputs \\(4\\):\n  F1.flow +0.02 m3/s\n  LV1.opening +0.5\n  river.head +4 m\n  P1.speed +1 \\(default\\)")));
 
 %!test
 %! net = vn_network ("w", "thermal", true, "species", {"chlorine"}, "decay", 2e-5);
@@ -282,5 +338,65 @@ endfunction
 %! assert (! isempty (strfind (s, "F1.temperature  15 degC (ambient)")));
 %! assert (! isempty (strfind (s, "F1.chlorine     1.8")));
 %! assert (! isempty (strfind (s, "(set by TC1)")));
+%!test
+%! ## a controller: action once, limits as [lo hi], gain in output per
+%! ## measured unit, setpoint in the measured unit
+%! net = vn_network ("w");
+%! net = vn_tank (net, "T1", "area", 4, "level", 2);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 40, "opening", 0.5);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
+%!                      "LV1.opening", "setpoint", 1, "gain", 2, "reset", 300, ...
+%!                      "action", "direct", "limits", [0 1.1]);
+%! net = vn_controller (net, "FC1", "measure", "T1.level", "manipulate", ...
+%!                      "F1.flow", "setpoint", 1.5, "gain", 0.01, "reset", 600, ...
+%!                      "limits", [0 0.05]);
+%! s = vn_show (net);
+%! assert (! isempty (strfind (s, "measure T1.level, manipulate LV1.opening, action direct, setpoint 1 m, gain 2 1/m, reset 300 s, limits [0 1.1]")));
+%! assert (! isempty (strfind (s, "setpoint 1.5 m, gain 0.01 (m3/s)/m, reset 600 s, limits [0 0.05] m3/s")));
+%! assert (numel (strfind (s, "action")), 2);
+%! assert (! isempty (strfind (s, "manipulate F1.flow, action reverse (default), setpoint 1.5 m")));
+%! assert (isempty (strfind (s, " lo ")) && isempty (strfind (s, " hi ")));
+
+%!test
+%! ## display units: a flow in m3/h, a level in mm
+%! net = vn_network ("w", "display", {"flow", "m3/h"; "level", "mm"});
+%! net = vn_tank (net, "T1", "area", 4, "level", 2);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! s = vn_show (net);
+%! assert (! isempty (strfind (s, "level 2000 mm")));
+%! assert (! isempty (strfind (s, "F1.flow  36 m3/h")));
+
+%!test
+%! ## 2,000 units: a summary of at most 2,500 characters, with the counts
+%! ## by kind, the first and the last units and where to look
+%! N = 1000;
+%! net = vn_network ("big");
+%! tn = arrayfun (@(k) sprintf ("T%d", k), 1:N, "uniformoutput", false);
+%! on = arrayfun (@(k) sprintf ("O%d", k), 1:N-1, "uniformoutput", false);
+%! net = vn_tank (net, tn, "area", ones (1, N), "level", ones (1, N));
+%! net = vn_orifice (net, on, tn(1:N-1), tn(2:N), "coeff", 0.01 * ones (1, N-1));
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! s = vn_show (net);
+%! assert (numel (s) < 2500);
+%! assert (! isempty (strfind (s, "2000 units: 1000 tank, 999 orifice, 1 feed")));
+%! assert (! isempty (regexp (s, "\n  T1 +tank")));
+%! assert (! isempty (regexp (s, "\n  F1 +feed")));
+%! assert (! isempty (strfind (s, "1990 units not shown")));
+%! assert (! isempty (strfind (s, "vn_show (net, \"all\", true)")));
+%! assert (isempty (regexp (s, "\n  T500 ", "once")));
+
+%!test
+%! ## "all": every unit
+%! N = 60;
+%! net = vn_network ("mid");
+%! tn = arrayfun (@(k) sprintf ("T%d", k), 1:N, "uniformoutput", false);
+%! net = vn_tank (net, tn, "area", ones (1, N), "level", ones (1, N));
+%! s = vn_show (net, "all", true);
+%! assert (numel (regexp (s, "\n  T[0-9]+ +tank")), N);
+%! assert (isempty (strfind (s, "not shown")));
+
+%!error <option "all" must be true or false> vn_show (vn_network (), "all", "yes")
+%!error <unknown option "every"> vn_show (vn_network (), "every", true)
 %!error <Invalid call> vn_show ()
 %!error <vn_show: NET must be a network made by vn_network, got a 1x1 struct> vn_show (struct ("type", "x"))

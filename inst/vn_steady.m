@@ -14,7 +14,9 @@
 ## must hold, @qcode{"adjust"} the inputs left free to achieve that, as
 ## many inputs as targets; e.g. the feed that holds a level:
 ## @code{vn_steady (net, "target", @{"T2.level", 1.5@}, "adjust",
-## @{"F1.flow"@})}.
+## @{"F1.flow"@})}.  Input and target values may be texts "VALUE UNIT"
+## in a unit of the quantity's dimension (@code{"F1.flow", "90 m3/h"},
+## @code{@{"T2.level", "1500 mm"@}}; see @code{vn_units}).
 ##
 ## The search is Newton's method on the volume balances (and the target
 ## equations) with the core's analytic Jacobian, a backtracking line
@@ -163,6 +165,8 @@ function [ovr, opt] = parse_args (net, args)
     endif
     if (any (name == "."))
       q = vn_quantity (net, name, "input", "vn_steady");
+      val = units_value ("vn_steady", sprintf ("input \"%s\"", name),
+                         "value", val, q.unitofmeasure);
       if (! (isnumeric (val) && isreal (val) && isscalar (val)
              && isfinite (val)))
         error ("Octave:invalid-input-arg",
@@ -238,6 +242,8 @@ function [padj, ytgt, tval, qadj] = inverse_problem (net, opt)
     name = opt.target{2*k-1};
     val = opt.target{2*k};
     q = vn_quantity (net, name, "output", "vn_steady");
+    val = units_value ("vn_steady", sprintf ("target \"%s\"", name),
+                       "value", val, q.unitofmeasure);
     if (! (isnumeric (val) && isreal (val) && isscalar (val) && isfinite (val)))
       error ("Octave:invalid-input-arg",
              "vn_steady: target %s must be a finite real scalar (%s)", name,
@@ -408,6 +414,18 @@ endfunction
 %! op = vn_steady (net, "freeze", true);
 %! ## pump held off: the orifice passes the feed, h = (F/c)^2
 %! assert (op.S1.level, (0.004 / 0.002)^2, 1e-8);
+%!test
+%! ## inputs and targets as "VALUE UNIT" give what the SI numbers give
+%! net = vn_tank (vn_network (), "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_orifice (net, "O1", "T1", "", "coeff", 0.01);
+%! a = vn_steady (net, "F1.flow", 0.02);
+%! b = vn_steady (net, "F1.flow", "72 m3/h");
+%! assert (b.T1.level, a.T1.level, 1e-9);
+%! c = vn_steady (net, "target", {"T1.level", "2250 mm"}, "adjust", "F1.flow");
+%! assert (c.F1.flow, 0.015, 1e-8);       # coeff sqrt (2.25) = 0.015
+%!error <vn_steady: input "F1.flow": VALUE "1 m": "m" is a unit of length; VALUE allows units of flow> vn_steady (vn_feed (vn_tank (vn_network (), "T1", "area", 2), "F1", "T1"), "F1.flow", "1 m")
+
 %!error <2 target\(s\) but 1 adjusted>
 %! net = one_tank (true);
 %! vn_steady (net, "target", {"T1.level", 2, "T1.volume", 4}, "adjust", {"F1.flow"});

@@ -1,10 +1,14 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {@var{ax} =} plot_fit (@var{h}, @var{est}, @var{opt})
 ## Draw a fit against data in figure @var{h}: for each experiment
-## @code{est.fit(k)} a column with the measured values as markers and the
-## model as lines, and below them a small axes of the residuals
-## (measured - predicted).  Return the axes handles, 2 x experiments
-## (model axes in row 1, residual axes in row 2).
+## @code{est.fit(k)} a column, and in it for each output a panel of the
+## measured values (markers) and the model (line), with a small panel of
+## the residuals (measured - predicted) as a line against time below it.
+## Censored readings (@code{est.fit(k).censored}) are drawn as large open
+## rings and have no residual.  Values are in the network's display units
+## (@code{est.net} or option @qcode{"net"}); legends sit beside the axes.
+## Return the axes handles, (2 x outputs) x experiments: the model panel
+## of output j in row 2j-1, its residuals in row 2j.
 ##
 ## Field contract, per experiment k:
 ## @table @code
@@ -14,8 +18,10 @@
 ## cellstr of the ny measured quantities ("T2.level").
 ## @item est.fit(k).measured, est.fit(k).predicted
 ## nt x ny matrices; NaN marks a missing sample.
+## @item est.fit(k).censored
+## optional nt x ny logical: readings at or past a sensor's range.
 ## @item est.fit(k).units
-## optional cellstr of ny units of measure.
+## optional cellstr of ny units of measure (SI).
 ## @item est.fit(k).name
 ## optional experiment label.
 ## @end table
@@ -27,46 +33,77 @@ function ax = plot_fit (h, est, opt)
   if (ne == 0)
     error ("Octave:invalid-input-arg", "vn_plot: EST.fit holds no experiment");
   endif
-  ax = zeros (2, ne);
+  net = [];
+  if (isfield (opt, "net"))
+    net = opt.net;
+  endif
+  if (isempty (net) && isfield (est, "net") && isstruct (est.net)
+      && isfield (est.net, "units"))
+    net = est.net;
+  endif
+  ny = max (arrayfun (@(f) numel (cellstr (f.names)), fit));
+  ax = zeros (2 * ny, ne);
   for k = 1:ne
-    [t, names, ym, yp] = check_experiment (fit(k), k);
+    [t, names, ym, yp, cens] = check_experiment (fit(k), k);
     [factor, tlabel] = plot_timescale (t, opt.time);
     x = t * factor;
-    ax(:,k) = plot_stack (h, [3 1], k, ne);
-    hl = [];
-    labels = {};
-    set (ax(2,k), "nextplot", "add");
-    for j = 1:numel (names)
-      s = plot_style (j, opt.color);
-      hl(end+1) = line ("parent", ax(1,k), "xdata", x, "ydata", ym(:,j),
-                        "linestyle", "none", "marker", s.marker,
-                        "markersize", 5, "color", s.color);
-      hl(end+1) = line ("parent", ax(1,k), "xdata", x, "ydata", yp(:,j),
-                        "linestyle", s.linestyle, "marker", "none",
-                        "color", s.color, "linewidth", 1.5);
-      labels(end+1:end+2) = {[names{j} " measured"], [names{j} " model"]};
-      line ("parent", ax(2,k), "xdata", x, "ydata", ym(:,j) - yp(:,j),
-            "linestyle", "none", "marker", s.marker, "markersize", 4,
-            "color", s.color);
+    n = numel (names);
+    axk = plot_stack (h, repmat ([3 1], 1, n), k, ne);
+    ax(1:2*n,k) = axk(:);
+    for j = 1:n
+      am = axk(2*j-1);
+      ar = axk(2*j);
+      [a, b, ul] = plot_qty (net, names{j}, unit_of (fit(k), j));
+      m = a * ym(:,j) + b;
+      p = a * yp(:,j) + b;
+      c = cens(:,j);
+      s = plot_style (1, opt.color);
+      mv = m;
+      mv(c) = NaN;
+      hl = line ("parent", am, "xdata", x, "ydata", mv, "linestyle", "none",
+                 "marker", s.marker, "markersize", 4, "color", s.color);
+      hl(2) = line ("parent", am, "xdata", x, "ydata", p, "linestyle", "-",
+                    "marker", "none", "color", s.color, "linewidth", 1.5);
+      labels = {"measured", "model"};
+      if (any (c))
+        hl(3) = line ("parent", am, "xdata", x(c), "ydata", m(c),
+                      "linestyle", "none", "marker", "o", "markersize", 9,
+                      "color", s.color, "tag", "censored");
+        labels{3} = "censored";
+      endif
+      r = m - p;
+      r(c) = NaN;
+      line ("parent", ar, "xdata", x, "ydata", r, "linestyle", "-",
+            "marker", "none", "color", s.color, "linewidth", 1, "tag", "residual");
+      line ("parent", ar, "xdata", [x(1) x(end)], "ydata", [0 0],
+            "linestyle", ":", "color", [0 0 0]);
+      if (x(end) > x(1))
+        set ([am ar], "xlim", [x(1) x(end)]);
+      endif
+      set (am, "xticklabel", {});
+      if (j < n)
+        set (ar, "xticklabel", {});
+      endif
+      ylabel (am, label_of (names{j}, ul), "interpreter", "none");
+      ylabel (ar, label_of ("residual", ul), "interpreter", "none");
+      plot_pad (am);
+      ## residuals: symmetric about zero, three ticks
+      rm = max (abs (r(isfinite (r))));
+      if (! isempty (rm) && rm > 0)
+        rm = 1.1 * rm;
+        set (ar, "ylim", [-rm rm], "ytick", [-1 0 1] * str2double (sprintf ("%.1g", rm / 1.1)));
+      endif
+      ## the same entries in every column: the legend beside the last
+      if (k == ne || any (c))
+        plot_legend (am, hl, labels);
+      endif
     endfor
-    if (x(end) > x(1))
-      set (ax(:,k), "xlim", [x(1) x(end)]);
-    endif
-    line ("parent", ax(2,k), "xdata", [x(1) x(end)], "ydata", [0 0],
-          "linestyle", ":", "color", [0 0 0]);
-    set (ax(1,k), "xticklabel", {});
-    ylabel (ax(1,k), value_label (fit(k), names), "interpreter", "none");
-    ylabel (ax(2,k), "residual");
-    xlabel (ax(2,k), tlabel);
-    if (ne > 1 || isfield (fit(k), "name"))
-      title (ax(1,k), experiment_name (fit(k), k), "interpreter", "none");
-    endif
-    plot_pad (ax(:,k));
-    plot_legend (ax(1,k), hl, labels);
+    xlabel (axk(end), tlabel);
+    title (axk(1), experiment_name (fit(k), k), "interpreter", "none");
   endfor
 endfunction
 
-function [t, names, ym, yp] = check_experiment (f, k)
+function [t, names, ym, yp, cens] = check_experiment (f, k)
   need = {"t", "names", "measured", "predicted"};
   if (! all (isfield (f, need)))
     error ("Octave:invalid-input-arg",
@@ -83,15 +120,23 @@ function [t, names, ym, yp] = check_experiment (f, k)
   endif
   ym = f.measured;
   yp = f.predicted;
+  cens = false (sz);
+  if (isfield (f, "censored") && isequal (size (f.censored), sz))
+    cens = logical (f.censored);
+  endif
 endfunction
 
-function s = value_label (f, names)
-  s = strjoin (names, ", ");
-  if (isfield (f, "units") && iscellstr (f.units) && ! isempty (f.units))
-    u = unique (f.units);
-    if (numel (u) == 1 && ! isempty (u{1}))
-      s = sprintf ("%s (%s)", s, u{1});
-    endif
+function s = unit_of (f, j)
+  s = "";
+  if (isfield (f, "units") && iscellstr (f.units) && numel (f.units) >= j)
+    s = f.units{j};
+  endif
+endfunction
+
+function s = label_of (name, u)
+  s = name;
+  if (! isempty (u))
+    s = sprintf ("%s (%s)", name, u);
   endif
 endfunction
 

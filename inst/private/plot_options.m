@@ -2,12 +2,13 @@
 ## @deftypefn {} {@var{opt} =} plot_options (@var{args})
 ## Parse the name/value options of @code{vn_plot} into @var{opt} with
 ## fields @code{file}, @code{title}, @code{figure}, @code{time},
-## @code{color} and @code{size}; check each value.
+## @code{color}, @code{size} and @code{net} (the network whose display
+## units to use); check each value.
 ## @end deftypefn
 
 function opt = plot_options (args)
   opt = struct ("file", "", "title", [], "figure", [], "time", "auto",
-                "color", false, "size", [900 600]);
+                "color", false, "size", [900 600], "net", []);
   [names, vals] = vn_option_pairs (args, "vn_plot");
   for i = 1:numel (names)
     name = names{i};
@@ -52,9 +53,15 @@ function opt = plot_options (args)
                  "vn_plot: option \"size\" must be [width height] in pixels, 100 to 10000");
         endif
         opt.size = val(:).';
+      case "net"
+        if (! (isstruct (val) && isfield (val, "units") && isfield (val, "options")))
+          error ("Octave:invalid-input-arg",
+                 "vn_plot: option \"net\" must be a network made by vn_network");
+        endif
+        opt.net = val;
       otherwise
         error ("Octave:invalid-input-arg",
-               "vn_plot: unknown option \"%s\"; allowed: file, title, figure, time, color, size",
+               "vn_plot: unknown option \"%s\"; allowed: file, title, figure, time, color, size, net",
                name);
     endswitch
   endfor

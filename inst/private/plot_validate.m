@@ -3,32 +3,23 @@
 ## Draw a validation (vn_validate), or the @code{fit} of a fit whose
 ## tests have censored readings, in figure @var{h}: the layout of a fit
 ## against data (plot_fit: measured markers, model lines, residuals
-## below), one column per test, with the censored readings drawn as large
-## open circles instead (they take no part, so they get no residual).
-## A validation's columns are titled with the r2 of each output.  Return
-## the axes handles as plot_fit does.
+## below, censored readings as large open rings without residuals: they
+## take no part), one column per test.  A validation's columns are titled
+## with the r2 of each output.  Return the axes handles as plot_fit does.
 ## @end deftypefn
 
 function ax = plot_validate (h, val, opt)
+  ## plot_fit draws the censored readings as rings, without residuals
   fit = rmfield (val, intersect (fieldnames (val), {"residuals", "rmse", "r2"}));
-  ## censored readings have no residual: drawn only as rings below
-  for k = 1:numel (fit)
-    fit(k).measured(fit(k).censored) = NaN;
-  endfor
   ax = plot_fit (h, struct ("fit", fit), opt);
   for k = 1:numel (val)
     v = val(k);
-    [factor, ~] = plot_timescale (v.t(:), opt.time);
     c = v.censored;
-    if (any (c(:)))
-      [i, j] = find (c);
-      line ("parent", ax(1,k), "xdata", v.t(i) * factor,
-            "ydata", v.measured(sub2ind (size (c), i, j)), "linestyle", "none",
-            "marker", "o", "markersize", 9, "color", [0 0 0],
-            "tag", "censored");
-    endif
     ## one line: gnuplot cannot stack a two-line title over these axes
-    note = v.name;
+    note = sprintf ("experiment %d", k);
+    if (isfield (v, "name") && ischar (v.name) && ! isempty (v.name))
+      note = v.name;
+    endif
     if (isfield (v, "r2"))
       fig = arrayfun (@(j) sprintf ("%s %.3f", v.names{j}, v.r2(j)),
                       1:numel (v.names), "uniformoutput", false);
@@ -52,7 +43,7 @@ endfunction
 %! h = figure ("visible", "off");
 %! unwind_protect
 %!   ax = plot_validate (h, val, struct ("time", "s", "color", false));
-%!   ring = findobj (ax(1), "tag", "censored");
+%!   ring = findobj (ax(:,1), "tag", "censored");
 %!   assert (get (ring, "xdata"), [90 100]);
 %!   assert (get (ring, "ydata"), [1.8 2]);
 %!   s = get (get (ax(1), "title"), "string");

@@ -193,10 +193,10 @@
 %! K = 2;  tau = 10;  Kc = 2;
 %! lin = struct ("A", -1/tau, "B", K/tau, "C", 1, "D", 0);
 %! fr = vn_frequency (lin, "controller", struct ("Kc", Kc, "Ti", Inf));
-%! assert (fr.loop.gm, Inf);
-%! assert (isnan (fr.loop.wpc));
-%! assert (fr.loop.wgc, sqrt (15) / tau, 1e-9);
-%! assert (fr.loop.pm, 180 - atand (sqrt (15)), 1e-7);
+%! assert (fr.loop.gain_margin, Inf);
+%! assert (isnan (fr.loop.phase_crossover));
+%! assert (fr.loop.gain_crossover, sqrt (15) / tau, 1e-9);
+%! assert (fr.loop.phase_margin, 180 - atand (sqrt (15)), 1e-7);
 
 %!test
 %! ## Integrator k/s with ideal PI (k 0.5, Kc 4, Ti 2): phase
@@ -207,9 +207,9 @@
 %! fr = vn_frequency (lin, "controller", struct ("Kc", Kc, "Ti", Ti));
 %! a = (k * Kc / Ti)^2;
 %! wc = sqrt ((a * Ti^2 + sqrt (a^2 * Ti^4 + 4 * a)) / 2);
-%! assert (fr.loop.wgc, wc, 1e-9);
-%! assert (fr.loop.pm, atand (wc * Ti), 1e-7);
-%! assert (fr.loop.gm, Inf);
+%! assert (fr.loop.gain_crossover, wc, 1e-9);
+%! assert (fr.loop.phase_margin, atand (wc * Ti), 1e-7);
+%! assert (fr.loop.gain_margin, Inf);
 
 %!test
 %! ## Three lags 1/(s + 1)^3, series form Kc 0.5, Ti Inf, Td 0 is P only:
@@ -218,9 +218,9 @@
 %! lin = struct ("A", A, "B", [0; 0; 1], "C", [1 0 0], "D", 0);
 %! pid = struct ("Kc", 0.5, "Ti", Inf, "Td", 0, "form", "series");
 %! fr = vn_frequency (lin, "controller", pid);
-%! assert (fr.loop.gm, 16, 1e-9);
-%! assert (fr.loop.wpc, sqrt (3), 1e-9);
-%! assert (fr.loop.pm, Inf);
+%! assert (fr.loop.gain_margin, 16, 1e-9);
+%! assert (fr.loop.phase_crossover, sqrt (3), 1e-9);
+%! assert (fr.loop.phase_margin, Inf);
 
 ## ---- relative gain array ----------------------------------------------
 

@@ -22,7 +22,7 @@
 %!                     "aux", {struct(), struct(), struct()});
 %! net.index = struct ("T1", 1, "O1", 2, "F1", 3);
 %! res = vn_simulate (net, [0 3600], "dt", 10);
-%! dax = @(h) findobj (h, "type", "axes", "-not", "tag", "legend");
+%! dax = @(h) findobj (h, "type", "axes", "-not", "tag", "vn_legend");
 %! ## Width and height from the IHDR chunk, big-endian at bytes 17-24
 %! ## (PNG specification, ISO/IEC 15948).
 %! pngsize = @(b) [b(17:20) * 256 .^ (3:-1:0)', b(21:24) * 256 .^ (3:-1:0)'];

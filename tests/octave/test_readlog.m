@@ -73,6 +73,11 @@
 %! assert (log.data, [1.5 1.2; 2.5 1.3; 3.5 NaN], 1e-15);
 %! assert (log.bad, [0 1]);
 
+%!test
+%! ## lines ended by a carriage return alone
+%! log = vn_readlog (put (dir, "cr.csv", "t,x [mm]\r0,1\r5,2\r"));
+%! assert ([log.t, log.x], [0 1e-3; 5 2e-3]);
+
 ## ---- calendar -------------------------------------------------------
 %!test
 %! ## across midnight, the end of February (2026: 28 days) and a year end
@@ -157,26 +162,30 @@
 %!error <vn_readlog: ".*empty.csv": the file holds no header line followed by data> vn_readlog (put (dir, "empty.csv", "\n\ntime,x\n"))
 %!error <vn_readlog: ".*noname.csv" line 1: column 2 of the header has no tag name> vn_readlog (put (dir, "noname.csv", "time,,x\n0,1,2\n"))
 %!error <vn_readlog: FILE must be a file name, got a double> vn_readlog (3)
+%!error <vn_readlog: ".*u16.txt": the file is UTF-16 text> vn_readlog (put (dir, "u16.txt", [char([255 254]), "t", char(0), ",", char(0)]))
 %!error <vn_readlog: ".*mid.csv" line 3 has 4 fields, the header 3: "10,1,2,3"> vn_readlog (put (dir, "mid.csv", "t,x,y\n0,1,2\n10,1,2,3\n20,1,2\n30,1,2\n"))
 %!error <vn_readlog: ".*mid2.csv" line 4 has 2 fields, the header 3: "20,1"> vn_readlog (put (dir, "mid2.csv", "t,x,y\n0,1,2\n10,Bad,2\n20,1\n30,1,2\n"))
 
 %!test
-%! ## many unreadable entries in one block (more than the line-by-line
-%! ## mending takes), a line of blanks, and blanks around values
-%! n = 200;
-%! x = (1:n).';
-%! v = arrayfun (@(k) sprintf ("%d", k), x, "uniformoutput", false);
-%! v(3:3:end) = {"Bad"};
-%! v(50) = {" 50 "};
-%! txt = strjoin (cellfun (@(k, s) sprintf ("%d,%s,1\n", 10 * k, s), num2cell (x), v,
-%!                         "uniformoutput", false), "");
-%! txt = strrep (txt, "1000,", "   \n1000,");
-%! log = vn_readlog (put (dir, "many.csv", ["t,a,b\n", txt]));
-%! want = x;
-%! want(3:3:end) = NaN;
-%! assert (log.t, 10 * (x - 1));
-%! assert (log.a, want);
-%! assert (log.bad, [floor(n / 3), 0]);
+%! ## more unreadable entries in one block than the line-by-line mending
+%! ## takes, and blanks around a value; then a line of blanks
+%! for n = [600, 40]
+%!   x = (1:n).';
+%!   v = arrayfun (@(k) sprintf ("%d", k), x, "uniformoutput", false);
+%!   v(3:3:end) = {"Bad"};
+%!   v(5) = {" 5 "};
+%!   txt = strjoin (cellfun (@(k, s) sprintf ("%d,%s,1\n", 10 * k, s), num2cell (x), v,
+%!                           "uniformoutput", false), "");
+%!   if (n == 40)
+%!     txt = strrep (txt, "100,", "   \n100,");
+%!   endif
+%!   log = vn_readlog (put (dir, "many.csv", ["t,a,b\n", txt]));
+%!   want = x;
+%!   want(3:3:end) = NaN;
+%!   assert (log.t, 10 * (x - 1));
+%!   assert (log.a, want);
+%!   assert (log.bad, [floor(n / 3), 0]);
+%! endfor
 
 %!test
 %! ## random exports against a reader written here line by line (strsplit

@@ -352,3 +352,16 @@
 %! est = vn_fit (mk (0.002), ex, {"O2.coeff"});
 %! assert (lastwarn (), "");
 %! assert (est.value, 0.0025, 1e-4 * 0.0025);
+
+%!test
+%! ## One input, one output: the transfer function leaves out the idle
+%! ## catch tank, so no common factor of s appears; at s = 0 it gives the
+%! ## gain (definition of G(0)).
+%! net = juice_line ();
+%! op = vn_steady (net, "tol", 1e-14);
+%! for pair = {{"P1.speed", "B1.level"}, {"F1.flow", "H2.level"}}
+%!   lin = vn_linearize (net, op, pair{1}{:});
+%!   assert (numel (lin.states), 6);
+%!   assert (numel (lin.den), 6);        # R1, B1, S1, H1, H2: not C1
+%!   assert (polyval (lin.num, 0) / polyval (lin.den, 0), lin.gain, 1e-6 * abs (lin.gain));
+%! endfor
