@@ -198,7 +198,7 @@
 %!  'vn_simulate (ctl, [0 10], vn_signal ("LV1.opening", "step", 1, 0, 1))', 'vn_simulate', {'controller "LC1"', 'LV1'};
 %!  'vn_steady (net, "F9.flow", 1)', 'vn_steady', {'quantity "F9.flow"', 'F9', 'units: T1, T2, F1'};
 %!  'vn_steady (net, "F1.flow", NaN)', 'vn_steady', {'F1', 'must be a finite real scalar'};
-%!  'vn_steady (net, "F1.flow", "lots")', 'vn_steady', {'F1', 'must be a finite real scalar'};
+%!  'vn_steady (net, "F1.flow", "lots")', 'vn_steady', {'F1.flow', 'must be a', 'lots'};
 %!  'vn_steady (net, "target", {"T2.level"}, "adjust", {"F1.flow"})', 'vn_steady', {'OUTPUT', 'must be a cell {OUTPUT'};
 %!  'vn_steady (net, "target", {"T9.level", 1}, "adjust", {"F1.flow"})', 'vn_steady', {'quantity "T9.level"', 'T9', 'units: T1, T2, F1'};
 %!  'vn_steady (net, "target", {"T2.level", 1}, "adjust", {"T1.level"})', 'vn_steady', {'quantity "T1.level"', 'T1', 'inputs in network "w": F1.flow, LV1.opening'};
