@@ -175,7 +175,7 @@ endfunction
 function opt = parse_options (args)
   opt = struct ("vary", [], "draws", [], "record", [], "dt", [], "seed", [],
                 "workers", nproc (), "initial", [], "reltol", 1e-6,
-                "abstol", 1e-8, "solver", 0, "maxsteps", 100000,
+                "abstol", 0, "solver", 0, "maxsteps", 100000,
                 "maxstep", 0, "verbose", false, "cluster", "");
   [names, vals] = vn_option_pairs (args, "vn_ensemble");
   for i = 1:numel (names)
