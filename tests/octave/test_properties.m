@@ -104,7 +104,11 @@
 %!      endif
 %!      top = Inf;
 %!    case "horizontal"
-%!      opts = {"shape", "horizontal", "diameter", H, "length", max(A / H, 1e-3 * H)};
+%!      ## a long drum: the core allows lengths up to 1e5 m, so a wide,
+%!      ## shallow reservoir gets a larger diameter instead
+%!      D = max (H, A / 1e5);
+%!      opts = {"shape", "horizontal", "diameter", D, "length", max(A / D, 1e-3 * D)};
+%!      H = D;
 %!      top = H;
 %!    case "sphere"
 %!      opts = {"shape", "sphere", "diameter", H};
