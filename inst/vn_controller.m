@@ -80,8 +80,8 @@ function net = vn_controller (net, name, varargin)
     a = o.action;
     if (! ischar (a) || ! any (strcmpi (a, {"reverse", "direct"})))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": ACTION must be \"reverse\" or \"direct\"",
-             fn, name);
+             "%s: controller \"%s\": ACTION must be \"reverse\" or \"direct\", got %s",
+             fn, name, build_value_str (a));
     endif
     par.action = double (strcmpi (a, "reverse"));
     aux.action = lower (a);
@@ -91,8 +91,8 @@ function net = vn_controller (net, name, varargin)
     if (! (isnumeric (L) && isreal (L) && numel (L) == 2 && L(1) < L(2)
            && ! any (isnan (L))))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi",
-             fn, name);
+             "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi, got %s",
+             fn, name, build_value_str (L));
     endif
     par.lo = L(1);
     par.hi = L(2);
@@ -101,8 +101,8 @@ function net = vn_controller (net, name, varargin)
     a = o.antiwindup;
     if (! ((islogical (a) || isnumeric (a)) && isscalar (a) && ! isnan (a)))
       error ("Octave:invalid-input-arg",
-             "%s: controller \"%s\": ANTIWINDUP must be true or false", fn,
-             name);
+             "%s: controller \"%s\": ANTIWINDUP must be true or false, got %s",
+             fn, name, build_value_str (a));
     endif
     par.antiwindup = double (logical (a));
   endif
@@ -137,3 +137,4 @@ endfunction
 %!error <ACTION> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "action", "sideways")
 %!error <ANTIWINDUP must be true or false> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "antiwindup", "yes")
 %!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
+%!error <vn_controller: controller "events": NAME "events" is reserved> vn_controller (net, "events", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1)

@@ -45,7 +45,9 @@
 ## runs that succeeded (Octave's @code{quantile}, its default method 5);
 ## @item stats
 ## @code{wall} (s), @code{workers}, @code{steps} (per run), @code{runs},
-## @code{ok} (runs that succeeded).
+## @code{ok} (runs that succeeded);
+## @item net, signals
+## the network (at its declared values) and the signals of the runs.
 ## @end table
 ##
 ## Options:
@@ -162,6 +164,8 @@ function ens = vn_ensemble (net, tspan, varargin)
   ens.stats = struct ("wall", wall, "workers", min (opt.workers, rows (P)),
                       "steps", steps, "runs", rows (P),
                       "ok", sum (status == 0));
+  ens.net = net;
+  ens.signals = u;
   if (opt.verbose)
     printf ("vn_ensemble: %d runs, %d failed, %d workers, %.3g s\n",
             rows (P), numel (ens.failed), ens.stats.workers, wall);
@@ -171,7 +175,7 @@ endfunction
 function opt = parse_options (args)
   opt = struct ("vary", [], "draws", [], "record", [], "dt", [], "seed", [],
                 "workers", nproc (), "initial", [], "reltol", 1e-6,
-                "abstol", 1e-8, "solver", 0, "maxsteps", 100000,
+                "abstol", 0, "solver", 0, "maxsteps", 100000,
                 "maxstep", 0, "verbose", false, "cluster", "");
   [names, vals] = vn_option_pairs (args, "vn_ensemble");
   for i = 1:numel (names)

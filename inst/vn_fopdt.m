@@ -29,6 +29,11 @@
 ## @item @qcode{"sopdt"}
 ## @code{K exp(-theta s) / ((tau1 s + 1) (tau2 s + 1))}; fields @code{gain},
 ## @code{tau1}, @code{tau2} (tau1 >= tau2) and @code{deadtime}.
+##
+## A dead time the data cannot tell from none (below a thousandth of the
+## shortest sampling interval) is reported as exactly 0, with
+## @code{m.stderr.deadtime} NaN; @code{vn_tune} then asks for a
+## closed-loop time constant where its rule would divide by it.
 ## @item @qcode{"twopoint"}
 ## Smith's two-point method only, on the response to the first input step:
 ## tau = 1.5 (t63.2 - t28.3), theta = t63.2 - tau, times counted from the
@@ -127,7 +132,7 @@ function m = vn_fopdt (t, u, y, varargin)
              "vn_fopdt: the %s fit did not converge in %d iterations; check the result or raise MAXITER\n",
              type, maxiter);
   endif
-  m = pack_model (type, p, info, ev, t, y, ok, mode);
+  m = pack_model (type, p, info, ev, t, y, ok, mode, 1e-3 * dtmin);
 
 endfunction
 
@@ -137,13 +142,23 @@ function r = resid (type, p, ev, t, y)
 endfunction
 
 ## Build the result struct, standard errors in the natural parameters.
-function m = pack_model (type, p, info, ev, t, y, ok, mode)
+function m = pack_model (type, p, info, ev, t, y, ok, mode, tmin)
 
   x = [p(1:2); exp(p(3:end))];
   n = nnz (ok);
   np = numel (p);
   ## d(model)/dx = d(model)/dp / (dx/dp); the log transform gives dx/dp = x.
   Jn = info.J ./ [1, 1, x(3:end).'];
+  ## The dead time is fitted as a log, so "none" shows as 1e-9 .. 1e-17 s:
+  ## below a thousandth of the sampling interval it sits at its bound 0
+  ## and is reported as exactly 0, with no standard error of its own.
+  zero = false (np, 1);
+  if (x(end) < tmin)
+    x(end) = 0;
+    zero(end) = true;
+    Jn(:,end) = [];
+    np -= 1;
+  endif
   s2 = info.ssr / max (n - np, 1);
   JtJ = Jn' * Jn;
   if (rcond (JtJ) < 1e-14)
@@ -154,7 +169,8 @@ function m = pack_model (type, p, info, ev, t, y, ok, mode)
   else
     C = s2 * inv (JtJ);
   endif
-  se = sqrt (max (diag (C), 0));
+  se = NaN (numel (zero), 1);
+  se(! zero) = sqrt (max (diag (C), 0));
   if (n <= np)
     se(:) = NaN;
   endif
@@ -208,7 +224,7 @@ function m = twopoint (t, y, ok, evh, ev, y0, mode)
   m.method = "smith";
   m.gain = sm.gain;
   m.tau = sm.tau;
-  m.deadtime = sm.deadtime;
+  m.deadtime = theta;
   m.stderr = struct ("gain", NaN, "tau", NaN, "deadtime", NaN, "y0", NaN);
   m.baseline = struct ("u0", ev.u0, "y0", y0, "t0", ev.t0);
   m.rmse = sqrt (mean ((y(ok) - fitted(ok)).^2));
@@ -332,6 +348,22 @@ endfunction
 %! t = (0:2:900)';
 %! u = 1 + 2 * (t >= 60);
 %! y = 3 + 0.5 * 2 * (1 - exp (-max (t - 60 - 30, 0) / 120));
+
+%!test
+%! ## no dead time in the data: reported as exactly 0, not 1e-9 .. 1e-17
+%! ## (first-order step response K (1 - exp (-t/tau)), textbook)
+%! tn = (0:1:600).';
+%! un = 1 + (tn >= 60);
+%! yn = 3 + 0.5 * (1 - exp (-max (tn - 60, 0) / 80));
+%! m0 = vn_fopdt (tn, un, yn);
+%! assert (m0.deadtime, 0);
+%! assert ([m0.gain, m0.tau], [0.5, 80], -1e-6);
+%! assert (isnan (m0.stderr.deadtime));
+%! assert (isfinite (m0.stderr.tau));
+%! mi = vn_fopdt (tn, un, 3 + 2e-3 * max (tn - 60, 0), "integrating");
+%! assert (mi.deadtime, 0);
+%! assert (mi.gain, 2e-3, -1e-8);
+%! fail ("vn_tune (m0, \"simc\")", "\"tauc\"");
 
 %!test
 %! ## Noiseless step: the least-squares fit recovers the model exactly

@@ -38,11 +38,8 @@ function net = vn_heater (net, name, tank, varargin)
            "%s: heater \"%s\": network \"%s\" is not thermal; declare it with vn_network (..., \"thermal\", true)",
            fn, name, net.name);
   endif
-  if (! ischar (tank) || ! isfield (net.index, tank)
-      || ! strcmp (net.units(net.index.(tank)).kind, "tank"))
-    error ("Octave:invalid-input-arg",
-           "%s: heater \"%s\": TANK must name a tank of the network", fn, name);
-  endif
+  build_check_ref (fn, sprintf ("heater \"%s\"", name), net, "TANK", tank,
+                   {"tank"});
   o = loop_options (varargin, {"duty", "max", "lag", "minlevel"}, fn, name);
   o = loop_units (net, name, o, fn, "heater");
   par = struct ();
@@ -90,5 +87,5 @@ endfunction
 %! assert (res.T1.temperature(end), 10 + 2e4 / (o.density * o.cp * 0.002), 1e-4);
 %! assert (res.H1.duty(end), 2e4, 1e-6);
 %!error <not thermal> vn_heater (vn_tank (vn_network ("n"), "T1", "area", 1), "H1", "T1", "duty", 1)
-%!error <TANK must name a tank> vn_heater (vn_network ("n", "thermal", true), "H1", "T9", "duty", 1)
+%!error <vn_heater: heater "H1": TANK names unit "T9", which network "n" does not hold> vn_heater (vn_network ("n", "thermal", true), "H1", "T9", "duty", 1)
 %!error <LAG must be .= 0> vn_heater (vn_tank (vn_network ("n", "thermal", true), "T1", "area", 1), "H1", "T1", "lag", -1)

@@ -90,6 +90,10 @@ function net = vn_network (varargin)
   for i = 1:numel (f)
     o.(f{i}) = given.(f{i});
   endfor
+  if (o.smooth > 0.1)
+    build_error (fn, label, "SMOOTH must lie in (0, 0.1] (m), got %s",
+                 build_value_str (o.smooth));
+  endif
   o.species = check_species (fn, label, o.species);
   o.decay = check_decay (fn, label, o.decay, numel (o.species));
   o.display = check_display (fn, label, o.display);
@@ -109,6 +113,10 @@ function sp = check_species (fn, label, sp)
     sp = {sp};
   endif
   sp = sp(:).';
+  if (numel (sp) > 8)
+    build_error (fn, label, "SPECIES: at most 8 are allowed, got %d",
+                 numel (sp));
+  endif
   reserved = {"shape", "area", "diameter", "length", "height", "base", ...
               "rim", "crest", "contractions", "spill", "level", "volume", ...
               "table", "ua", "temperature", "head", "flow", "energy"};

@@ -68,6 +68,7 @@ function res = vn_simulate (net, tspan, varargin)
     args(1) = [];
   endif
   opt = parse_options (args);
+  build_check_net ("vn_simulate", net);
   if (isempty (opt.record))
     cn = vn_compile (net, "results");
     tm = cn.tmpl;
@@ -107,7 +108,7 @@ function res = vn_simulate (net, tspan, varargin)
 endfunction
 
 function opt = parse_options (args)
-  opt = struct ("dt", [], "initial", [], "reltol", 1e-6, "abstol", 1e-8,
+  opt = struct ("dt", [], "initial", [], "reltol", 1e-6, "abstol", 0,
                 "solver", 0, "maxsteps", 100000, "maxstep", 0,
                 "verbose", false, "record", []);
   [names, vals] = vn_option_pairs (args, "vn_simulate");

@@ -291,7 +291,11 @@ function [net, names] = freeze_switches (net, freeze)
            "vn_steady: switch %s turns its input on and off, so the network has no single steady state; give \"freeze\", true to hold each switch at the output it starts with",
            strjoin (strcat ("\"", names, "\""), ", "));
   endif
-  r0 = vn_simulate (net, [0 1e-6], "record", strcat (names, ".output"));
+  try
+    r0 = vn_simulate (net, [0 1e-6], "record", strcat (names, ".output"));
+  catch err
+    vn_rethrow (err, "vn_steady");
+  end_try_catch
   for j = 1:numel (sw)
     q = net.units(sw(j)).aux.manipulate;
     dot = find (q == ".", 1);

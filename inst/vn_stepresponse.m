@@ -102,7 +102,11 @@ function sr = vn_stepresponse (net, op, input, amount, varargin)
     outputs = tank_levels (net);
   endif
 
-  lin = vn_linearize (net, op, {input}, outputs);
+  try
+    lin = vn_linearize (net, op, {input}, outputs);
+  catch err
+    vn_rethrow (err, "vn_stepresponse");
+  end_try_catch
   [pnet, x] = lin_operating (net, op, "vn_stepresponse");
   q = vn_quantity (pnet, input, "input", "vn_stepresponse");
   before = input_value (pnet, q);

@@ -43,8 +43,8 @@ function net = vn_switch (net, name, varargin)
     v = o.values;
     if (! (isnumeric (v) && isreal (v) && numel (v) == 2 && all (isfinite (v))))
       error ("Octave:invalid-input-arg",
-             "%s: switch \"%s\": VALUES must be [off-value on-value], finite",
-             fn, name);
+             "%s: switch \"%s\": VALUES must be [off-value on-value], two finite numbers, got %s",
+             fn, name, build_value_str (v));
     endif
     par.offvalue = v(1);
     par.onvalue = v(2);

@@ -324,3 +324,4 @@ endfunction
 %!error <vn_tank: tank "T1": options must come in name/value pairs> vn_tank (vn_network (), "T1", "area")
 %!error <vn_tank: tank "T1" to "T2": AREA must be a scalar, or a vector or cell array of one value per unit \(2\), got a 1x3 double> vn_tank (vn_network (), {"T1", "T2"}, "area", [1 2 3])
 %!error <vn_tank: tank "T2": LEVEL must not exceed RIM \(2 m\), got 2.5> vn_tank (vn_network (), {"T1", "T2"}, "area", 1, "rim", 2, "level", [1 2.5])
+%!error <vn_tank: tank "t": NAME "t" is reserved: results carry a field of that name.*reserved names: .*stats> vn_tank (vn_network (), "t", "area", 1)

@@ -20,7 +20,9 @@
 ## Skogestad's SIMC rules (2003).  PI by default: Kc = tau/(K (tauc +
 ## theta)), Ti = min(tau, 4 (tauc + theta)); integrating: Kc = 1/(k' (tauc +
 ## theta)), Ti = 4 (tauc + theta).  Option @qcode{"tauc"} sets the
-## closed-loop time constant, default the dead time.  A second-order model
+## closed-loop time constant, default the dead time; a model whose dead
+## time is 0 (or below 1e-6 tau, taken as 0) has no default and SIMC asks
+## for @qcode{"tauc"}.  A second-order model
 ## is reduced by the half rule for PI; with option @qcode{"pid"} it gets the
 ## series SIMC PID with Td = tau2 (@code{pid.form} is @qcode{"series"}).
 ## @item @qcode{"imc"}
@@ -90,6 +92,13 @@ function pid = vn_tune (model, method, varargin)
              method);
   endswitch
 
+  ## A rule never hands back settings no loop could run with.
+  if (! (isfinite (r.Kc) && r.Kc != 0 && r.Ti > 0 && isfinite (r.Td)
+         && r.Td >= 0))
+    error ("Octave:invalid-input-arg",
+           "vn_tune: method \"%s\" gives no usable settings for this model (Kc %g, Ti %g, Td %g); check the model's gain, tau and deadtime, or give \"tauc\" / \"lambda\"\n",
+           lower (method), r.Kc, r.Ti, r.Td);
+  endif
   if (isfield (r, "warn") && ! isempty (r.warn))
     warning ("vesselnet:tune-unreliable", "vn_tune: %s\n", r.warn);
   endif
@@ -225,6 +234,23 @@ endfunction
 %! p = vn_tune (mi, "simc", "tauc", 3);
 %! assert ([p.Kc, p.Ti], [2.5, 16], 1e-12);
 
+%!test
+%! ## Skogestad, J. Process Control 13 (2003), example E1 (memory): the
+%! ## half rule reduces the model to tau1 2.5, theta 1.47, and SIMC PI with
+%! ## tauc = theta gives Kc 0.85, Ti 2.5
+%! p = vn_tune (struct ("gain", 1, "tau", 2.5, "deadtime", 1.47), "simc");
+%! assert ([p.Kc, p.Ti], [0.85, 2.5], 2e-3);
+%!test
+%! ## a dead time that ran to its bound (1e-12 s next to 60 s) is zero:
+%! ## SIMC asks for tauc instead of returning Kc ~ 1e13
+%! m0 = struct ("gain", 2, "tau", 60, "deadtime", 1e-12);
+%! fail ("vn_tune (m0, \"simc\")", "DEADTIME is 0.*\"tauc\", the closed-loop time constant");
+%! fail ("vn_tune (m0, \"zn\")", "not defined for model DEADTIME 0");
+%! p = vn_tune (m0, "simc", "tauc", 20);
+%! assert ([p.Kc, p.Ti], [60 / (2 * 20), 60], 1e-12);   # Skogestad (2003), theta = 0
+%! p = vn_tune (m0, "imc");
+%! assert (p.Kc < 10 && p.Ti > 1);
+%! fail ("vn_tune (struct (\"type\", \"integrating\", \"gain\", 1e-3, \"deadtime\", 1e-15), \"simc\")", "\"tauc\"");
 %!test
 %! ## Skogestad (2003) half rule then SIMC PI: tau 10 + 1, theta 1 + 1
 %! p = vn_tune (struct ("gain", 2, "tau1", 10, "tau2", 2, "deadtime", 1), "simc");

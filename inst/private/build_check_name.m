@@ -18,6 +18,7 @@ function label = build_check_name (fn, net, kind, name)
     build_error (fn, label, ["NAME must be an identifier (a letter, then ", ...
                              "letters, digits or _), got \"%s\""], name);
   endif
+  build_check_reserved (fn, label, name);
   idx = build_find_unit (net, name);
   if (idx > 0)
     old = net.units(idx).kind;

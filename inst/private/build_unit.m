@@ -1,9 +1,12 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {@var{u} =} build_unit (@var{name}, @var{kind}, @var{from}, @var{to}, @var{par}, @var{table}, @var{aux})
 ## Make one checked unit, fields in the order of doc/internals.md section 1.
+## Its numeric options are checked against the core's ranges here.
 ## @end deftypefn
 
 function u = build_unit (name, kind, from, to, par, table, aux)
+  build_check_range (["vn_" kind], sprintf ("%s \"%s\"", kind, name), kind,
+                     par);
   u = struct ("name", name, "kind", kind, "from", from, "to", to,
               "par", [], "table", table, "aux", []);
   ## Assigned after struct () so that struct values are not taken as arrays.

@@ -4,6 +4,8 @@
 ## @end deftypefn
 
 function net = loop_append (net, name, kind, par, aux)
+  build_check_range (["vn_" kind], sprintf ("%s \"%s\"", kind, name), kind,
+                     par);
   u = struct ("name", name, "kind", kind, "from", "", "to", "", "par", par,
               "table", [], "aux", aux);
   if (isempty (net.units))

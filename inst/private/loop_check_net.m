@@ -13,6 +13,7 @@ function loop_check_net (net, name, fn)
     error ("Octave:invalid-input-arg",
            "%s: NAME must be an identifier, got %s", fn, disp_name (name));
   endif
+  build_check_reserved (fn, sprintf ("%s \"%s\"", fn(4:end), name), name);
   if (isfield (net.index, name))
     error ("Octave:invalid-input-arg",
            "%s: unit \"%s\" already exists in network \"%s\"", fn, name,

@@ -8,7 +8,8 @@ function o = loop_options (args, allowed, fn, name, kind, required)
   o = struct ();
   if (mod (numel (args), 2) != 0)
     error ("Octave:invalid-input-arg",
-           "%s: unit \"%s\": options come in name/value pairs", fn, name);
+           "%s: %s \"%s\": options come in name/value pairs, got %d arguments after the name; allowed: %s",
+           fn, fn(4:end), name, numel (args), strjoin (allowed, ", "));
   endif
   for i = 1:2:numel (args)
     key = args{i};
@@ -19,7 +20,7 @@ function o = loop_options (args, allowed, fn, name, kind, required)
         shown = class (key);
       endif
       error ("Octave:invalid-input-arg",
-             "%s: unit \"%s\": unknown option \"%s\"; allowed: %s", fn, name,
+             "%s: %s \"%s\": unknown option \"%s\"; allowed: %s", fn, fn(4:end), name,
              shown, strjoin (allowed, ", "));
     endif
     o.(lower (key)) = args{i+1};

@@ -7,8 +7,8 @@ function v = loop_scalar (v, field, name, fn, infok)
   if (! (isnumeric (v) && isreal (v) && isscalar (v)) || isnan (v)
       || (! infok && isinf (v)))
     error ("Octave:invalid-input-arg",
-           "%s: unit \"%s\": %s must be a real finite scalar, got %s", fn,
-           name, upper (field), mat2str_safe (v));
+           "%s: %s \"%s\": %s must be a real %sscalar, got %s", fn,
+           fn(4:end), name, upper (field), ifelse_str (infok), mat2str_safe (v));
   endif
   v = double (v);
 endfunction
@@ -18,5 +18,13 @@ function s = mat2str_safe (v)
     s = mat2str (v);
   else
     s = sprintf ("a %s of size %s", class (v), mat2str (size (v)));
+  endif
+endfunction
+
+function t = ifelse_str (infok)
+  if (infok)
+    t = "";
+  else
+    t = "finite ";
   endif
 endfunction

@@ -4,7 +4,8 @@
 ## integrating (logical), K, tau, tau2 (0 for first order), theta.
 ## A self-regulating model needs gain, tau (or tau1) and deadtime, with an
 ## optional tau2; an integrating one has type "integrating", gain (k') and
-## deadtime.
+## deadtime.  A dead time below 1e-6 times the time constant (below
+## 1e-6 time units for an integrating model) is taken as exactly 0.
 ## @end deftypefn
 
 function mm = tune_model (model)
@@ -28,6 +29,10 @@ function mm = tune_model (model)
   mm.tau = NaN;
   mm.tau2 = 0;
   if (mm.integrating)
+    ## no time constant to compare with: below a microsecond is zero
+    if (mm.theta < 1e-6)
+      mm.theta = 0;
+    endif
     return;
   endif
   if (isfield (model, "tau"))
@@ -49,6 +54,12 @@ function mm = tune_model (model)
   ## Keep the slower lag first, as the rules assume tau1 >= tau2.
   if (mm.tau2 > mm.tau)
     [mm.tau, mm.tau2] = deal (mm.tau2, mm.tau);
+  endif
+  ## A dead time a million times shorter than the time constant is a fit
+  ## that ran to its bound, not a property of the process: it is zero, and
+  ## a rule that needs one then asks for tauc instead of dividing by it.
+  if (mm.theta < 1e-6 * mm.tau)
+    mm.theta = 0;
   endif
 
 endfunction

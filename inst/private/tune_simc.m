@@ -57,7 +57,7 @@ function tauc = pick_tauc (opt, theta)
   if (isempty (tauc))
     if (theta == 0)
       error ("Octave:invalid-input-arg",
-             "vn_tune: SIMC takes tauc = dead time by default, but the model DEADTIME is 0; give option \"tauc\" (time, > 0)\n");
+             "vn_tune: SIMC takes tauc = dead time by default, but the model DEADTIME is 0 (or negligible next to tau); give option \"tauc\", the closed-loop time constant (time, > 0), e.g. a fifth to a half of tau\n");
     endif
     tauc = theta;
   endif

@@ -116,7 +116,7 @@ function tm = full_template (net, layout)
     isout = map(:) <= no;
     src = zeros (numel (F2), numel (idx));
     src(isout,:) = layout.ooff(idx) + map(isout)(:);
-    V = input_values (U(idx), k, inp)(map(! isout) - no, :);
+    V = input_values (U(idx), k, inp, net.options.ambient)(map(! isout) - no, :);
     src(! isout,:) = -(nconst + reshape (1:numel (V), size (V)));
     consts{c} = V(:);
     nconst += numel (V);
@@ -147,8 +147,9 @@ function tm = full_template (net, layout)
 endfunction
 
 ## Declared values of inputs INP of units U (one kind), defaults where
-## not given: one row per input, one column per unit.
-function vals = input_values (U, k, inp)
+## not given: one row per input, one column per unit.  A temperature not
+## given is the network's AMBIENT (what the core uses), never NaN.
+function vals = input_values (U, k, inp, ambient)
   vals = repmat (k.defaults(inp)(:), 1, numel (U));
   if (isempty (inp))
     return;
@@ -171,6 +172,12 @@ function vals = input_values (U, k, inp)
       endfor
     endfor
   end_try_catch
+  it = find (strcmp (k.params(inp), "temperature"));
+  if (! isempty (it))
+    row = vals(it,:);
+    row(isnan (row)) = ambient;
+    vals(it,:) = row;
+  endif
 endfunction
 
 ## How carried properties are named in results (the rule of

@@ -32,9 +32,13 @@ function q = vn_quantity (net, name, what, caller, layout)
   var = name(dot+1:end);
   ui = build_find_unit (net, uname);
   if (ui == 0)
+    names = {net.units.name};
+    if (numel (names) > 20)
+      names = [names(1:20), {sprintf("... (%d more)", numel (names) - 20)}];
+    endif
     error ("Octave:invalid-input-arg",
-           "%s: quantity \"%s\": the network has no unit \"%s\"", caller,
-           name, uname);
+           "%s: quantity \"%s\": the network has no unit \"%s\"; units: %s",
+           caller, name, uname, strjoin (names, ", "));
   endif
   s = vn_schema ();
   kind = net.units(ui).kind;
@@ -60,9 +64,17 @@ function q = vn_quantity (net, name, what, caller, layout)
         ok = ! isempty (slot) && ! k.iscode(slot);
       endif
       if (! ok)
+        allowed = user_names (net, allowed);
+        if (isempty (allowed))
+          error ("Octave:invalid-input-arg",
+                 "%s: quantity \"%s\": %s is not %s of %s \"%s\": a %s has no %s; %s in network \"%s\": %s",
+                 caller, name, q.var, ifelse_str (what), kind, uname, kind,
+                 plural (what), plural (what), net.name,
+                 strjoin (network_inputs (net, s), ", "));
+        endif
         error ("Octave:invalid-input-arg",
                "%s: quantity \"%s\": %s is not %s of %s \"%s\"; allowed: %s",
-               caller, name, var, ifelse_str (what), kind, uname,
+               caller, name, q.var, ifelse_str (what), kind, uname,
                strjoin (allowed, ", "));
       endif
       q.slot = slot - 1;
@@ -84,6 +96,48 @@ function q = vn_quantity (net, name, what, caller, layout)
       q.index = unit_offset (net, s, ui, "ooff", layout) + j - 1;
       q.unitofmeasure = ounits{j};
   endswitch
+endfunction
+
+## Parameter names as a user types them: the core's species slots c1..c8
+## become the declared species (none when there are none), and a
+## temperature is listed only in a thermal network.
+function names = user_names (net, names)
+  sp = net.options.species;
+  keep = true (size (names));
+  for i = 1:numel (names)
+    k = sscanf (names{i}, "c%d");
+    if (! isempty (k) && strcmp (names{i}, sprintf ("c%d", k)))
+      if (k <= numel (sp))
+        names{i} = sp{k};
+      else
+        keep(i) = false;
+      endif
+    elseif (strcmp (names{i}, "temperature") && ! net.options.thermal)
+      keep(i) = false;
+    endif
+  endfor
+  names = names(keep);
+endfunction
+
+## Every input quantity of the network, for a message.
+function list = network_inputs (net, s)
+  list = {};
+  for i = 1:numel (net.units)
+    k = s.(net.units(i).kind);
+    p = user_names (net, k.params(k.isinput));
+    list = [list, strcat([net.units(i).name "."], p)];
+  endfor
+  if (isempty (list))
+    list = {"none"};
+  endif
+endfunction
+
+function t = plural (what)
+  if (strcmp (what, "input"))
+    t = "inputs";
+  else
+    t = "numeric parameters";
+  endif
 endfunction
 
 function t = ifelse_str (what)

@@ -152,6 +152,7 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
           u->dq.n = 0;
           u->q = u->k->flow (net, u, s, d, x,
                              (want_d || want_dy) ? &u->dq : NULL);
+          u->q += vn_link_dry (s, d, (want_d || want_dy) ? &u->dq : NULL);
           if (balances)
             {
               balance (net, u->ref[0], -1.0, u->q, &u->dq, fw, want_jx,

@@ -61,10 +61,15 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
       vn_lf_axpy (dq, 0, &d->dH);
       return F;
     }
-  double dg, g = vn_gate (d->level, net->smooth, &dg);
+  /* a draw-off: the liquid gate at the bottom of the tank */
+  vn_lf de;
+  vn_lf *pde = dq ? &de : NULL;
+  vn_lf_zero (pde);
+  int dry;
+  double e = vn_tank_above (net, d, 0, -1, pde, &dry);
+  double dg, g = vn_gate_liquid (e, net->smooth, dry, &dg);
   vn_lf_p (dq, vn_pcol (u, FLOW), g);
-  vn_lf_axpy (dq, F * dg, &d->dH);
-  vn_lf_p (dq, d->pc_base, -F * dg);
+  vn_lf_axpy (dq, F * dg, pde);
   return F * g;
 }
 

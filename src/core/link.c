@@ -65,35 +65,70 @@ double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
   return es - ed;
 }
 
-/* Gate on the liquid available upstream of the flow's direction. */
+/* Gate on the liquid available upstream of the flow's direction: a
+ * smooth step of the liquid above the nozzle (vn_tank_above), reversing
+ * the flow in proportion to a volume below empty. */
 double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
                      double dh, double outlet, double inlet, int pc_outlet,
                      int pc_inlet, double band, vn_lf *dg)
 {
-  (void) net;
   int fwd = dh >= 0;
   double gs = 1, gd = 1, dgs = 0, dgd = 0;
+  vn_lf es, ed;
+  vn_lf *pes = dg ? &es : NULL, *ped = dg ? &ed : NULL;
+  vn_lf_zero (pes);
+  vn_lf_zero (ped);
   /* without derivatives only the upstream side matters */
+  int dry;
   if (s && s->istank && (fwd || dg))
-    gs = vn_gate (s->level - outlet, band, &dgs);
+    {
+      double e = vn_tank_above (net, s, outlet, pc_outlet, pes, &dry);
+      gs = vn_gate_liquid (e, band, dry, &dgs);
+    }
   if (d && d->istank && (!fwd || dg))
-    gd = vn_gate (d->level - inlet, band, &dgd);
+    {
+      double e = vn_tank_above (net, d, inlet, pc_inlet, ped, &dry);
+      gd = vn_gate_liquid (e, band, dry, &dgd);
+    }
   if (!dg)
     return fwd ? gs : gd;
-  double cs = fwd ? dgs : 0, cd = fwd ? 0 : dgd;
+  if (s && s->istank)
+    vn_lf_axpy (dg, fwd ? dgs : 0, &es);
+  if (d && d->istank)
+    vn_lf_axpy (dg, fwd ? 0 : dgd, &ed);
+  return fwd ? gs : gd;
+}
+
+/* Below empty (an excursion of the integrator, within its tolerance) a
+ * tank has no outflow.  A gated flow out of it reverses there in
+ * proportion (vn_gate_liquid), but free discharge has no driving head
+ * left, so without a further term an empty tank is a neutral state: the
+ * integrator's accepted errors add up and a tank drained dry drifts ever
+ * lower.  Every link joined to a tank holding a negative volume V
+ * therefore also returns -V / TAU_DRY to it from the other end (from
+ * waste when it discharges freely): empty attracts, volume stays
+ * conserved between tanks, and the term is zero wherever the volume is
+ * not negative.  TAU_DRY is long beside the gate's own reversal, so the
+ * slope of the balance hardly changes through empty and Newton keeps
+ * converging there (a stiff return made the iterates cycle about empty). */
+#define TAU_DRY 1.0   /* s */
+
+double vn_link_dry (const vn_node *s, const vn_node *d, vn_lf *dq)
+{
+  double q = 0;
   if (s && s->istank)
     {
-      vn_lf_axpy (dg, cs, &s->dH);
-      vn_lf_p (dg, s->pc_base, -cs);
-      vn_lf_p (dg, pc_outlet, -cs);
+      int neg = s->V < 0;
+      q += neg ? s->V / TAU_DRY : 0;
+      vn_lf_x (dq, s->xV, neg ? 1 / TAU_DRY : 0);
     }
   if (d && d->istank)
     {
-      vn_lf_axpy (dg, cd, &d->dH);
-      vn_lf_p (dg, d->pc_base, -cd);
-      vn_lf_p (dg, pc_inlet, -cd);
+      int neg = d->V < 0;
+      q -= neg ? d->V / TAU_DRY : 0;
+      vn_lf_x (dq, d->xV, neg ? -1 / TAU_DRY : 0);
     }
-  return fwd ? gs : gd;
+  return q;
 }
 
 /* A link joins a node (tank or boundary) to a node or to free discharge,

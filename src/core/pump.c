@@ -64,8 +64,11 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
   if (vn_given (net, u, SUCTION) && s->istank)
     {
       /* a wider band lowers the gate: g(l/b), dg/db = -g'(l) l / b */
-      double dgs, sl = s->level - out_, bd = band (net, u);
-      vn_gate (sl, bd, &dgs);
+      double dgs, bd = band (net, u);
+      int dry;
+      double sl = vn_tank_above (net, s, out_, vn_pcol (u, OUTLET), NULL,
+                                 &dry);
+      vn_gate_liquid (sl, bd, dry, &dgs);
       vn_lf_p (pg, vn_pcol (u, SUCTION), -dgs * sl / bd);
     }
   double dh = vn_link_dh (u, s, d, out_, in_, vn_pcol (u, OUTLET),
@@ -99,6 +102,7 @@ static double flow (vn_net *net, vn_unit *u, const vn_node *s,
       vn_lf_axpy (dq, r / sk, &dg);
     }
   u->d[0] = sp * sp * H0 - k * q * q;
+  u->d[1] = q;
   return q;
 }
 
@@ -124,13 +128,20 @@ static void outputs (vn_net *net, vn_unit *u, const vn_node *nd,
       vn_lf_axpy (&dy[1], -1, &ddh);
       return;
     }
-  /* head = s^2 H0 - k q^2 */
+  /* head = s^2 H0 - k q^2, q the pump law's flow (u->q also holds the
+   * return from below empty, link.c) */
   double sp = net->p[u->poff + SPEED], H0 = net->p[u->poff + SHUTOFF];
-  double k = net->p[u->poff + K], q = u->q;
+  double k = net->p[u->poff + K], q = u->d[1];
+  const vn_node *s = &net->nd[u->ref[0]];
+  const vn_node *d = u->ref[1] >= 0 ? &net->nd[u->ref[1]] : NULL;
+  vn_lf ddry;
+  vn_lf_zero (&ddry);
+  vn_link_dry (s, d, &ddry);
   vn_lf_p (&dy[1], vn_pcol (u, SPEED), 2 * sp * H0);
   vn_lf_p (&dy[1], vn_pcol (u, SHUTOFF), sp * sp);
   vn_lf_p (&dy[1], vn_pcol (u, K), -q * q);
   vn_lf_axpy (&dy[1], -2 * k * q, &u->dq);
+  vn_lf_axpy (&dy[1], 2 * k * q, &ddry);
 }
 
 const vn_kind vn_kind_pump = {

@@ -33,11 +33,17 @@ int vn_set_signals (vn_net *net, int nsig, const int *unit, const int *slot,
                         u->k->name, u->name, slot[i],
                         pidx >= 0 ? u->k->par[slot[i]].name : "no such slot");
       if (net->override && net->override[pidx] >= 0)
-        return vn_fail (net, VN_EARG, "signal on %s.%s: that input is "
-                        "driven by %s \"%s\"; drive its setpoint instead",
-                        u->name, u->k->par[slot[i]].name,
-                        net->u[net->override[pidx]].k->name,
-                        net->u[net->override[pidx]].name);
+        {
+          const vn_unit *o = &net->u[net->override[pidx]];
+          int ctl = o->k == &vn_kind_controller;
+          return vn_fail (net, VN_EARG, "signal on %s.%s: that input is "
+                          "driven by %s \"%s\"; %s", u->name,
+                          u->k->par[slot[i]].name, o->k->name, o->name,
+                          ctl ? "drive the controller's setpoint instead"
+                              : "a switch sets it from its on and off "
+                                "levels; signals may drive only inputs "
+                                "no switch or controller sets");
+        }
       if (off[i] < 0)
         return vn_fail (net, VN_EARG, "signal %d on %s.%s: data offset %d "
                         "is negative", i + 1, u->name,

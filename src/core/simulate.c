@@ -76,6 +76,7 @@ typedef struct sim {
   double *ycache;
   int cached;
   record rec;
+  long maxsteps;    /* steps allowed per output interval */
   outblk out;
   char cvmsg[256];  /* the integrator's own last complaint */
 } sim;
@@ -262,9 +263,26 @@ static void store_sens (sim *S, int k, int nt, double t, const double *x)
     }
 }
 
-/* Restart after a breakpoint or a switch; sensitivities carry on. */
-static int restart (sim *S, void *mem, double t, N_Vector y)
+/* Add the integrator's counters since its last (re)start to the run's
+ * totals: CVodeReInit sets them back to zero. */
+static void add_counts (void *mem, vn_sim_stats *st)
 {
+  long v;
+  if (CVodeGetNumSteps (mem, &v) == CV_SUCCESS) st->steps += v;
+  if (CVodeGetNumRhsEvals (mem, &v) == CV_SUCCESS) st->rhs += v;
+  if (CVodeGetNumJacEvals (mem, &v) == CV_SUCCESS) st->jac += v;
+  if (CVodeGetNumLinSolvSetups (mem, &v) == CV_SUCCESS) st->setups += v;
+  if (CVodeGetNumErrTestFails (mem, &v) == CV_SUCCESS) st->errfails += v;
+  if (CVodeGetNumNonlinSolvConvFails (mem, &v) == CV_SUCCESS)
+    st->convfails += v;
+}
+
+/* Restart after a breakpoint or a switch; sensitivities carry on, and
+ * the counts so far go to the totals. */
+static int restart (sim *S, void *mem, double t, N_Vector y,
+                    vn_sim_stats *stats)
+{
+  add_counts (mem, stats);
   int flag = CVodeReInit (mem, t, y);
   if (flag == CV_SUCCESS && S->yS)
     {
@@ -277,11 +295,71 @@ static int restart (sim *S, void *mem, double t, N_Vector y)
   return flag;
 }
 
+/* Absolute tolerance of each state, scaled to what it holds: a volume
+ * by its tank's reference plan area times LEVEL_TOL, so every tank is
+ * integrated to the same level accuracy (a sight tube is not swamped, a
+ * reservoir not over-resolved); a tank's heat (V T) by the same volume
+ * times 1 K; its species (V c) by that volume times the largest
+ * concentration declared in the network (1 when none); any other state
+ * (valve stem, heater duty, controller) by OTHER_TOL. */
+#define LEVEL_TOL 1e-8   /* m */
+#define OTHER_TOL 1e-8
+static void state_abstol (const vn_net *net, double *atol)
+{
+  double cref = 0;
+  for (int i = 0; i < net->nu; i++)
+    {
+      const vn_unit *u = &net->u[i];
+      for (int k = 0; k < u->k->npar; k++)
+        if (strcmp (u->k->par[k].unit, "conc") == 0)
+          cref = fmax (cref, fabs (net->p[u->poff + k]));
+    }
+  if (!(cref > 0))
+    cref = 1;
+  for (int i = 0; i < net->nx; i++)
+    {
+      const vn_unit *u = &net->u[vn_state_unit (net, i)];
+      if (u->k != &vn_kind_tank)
+        {
+          atol[i] = OTHER_TOL;
+          continue;
+        }
+      int j = i - u->xoff;
+      double av = vn_tank_area_ref (net, u) * LEVEL_TOL;
+      atol[i] = j == 0 ? av : (j == 1 && net->thermal) ? av * 1.0 : av * cref;
+    }
+}
+
 static double now (void)
 {
   struct timespec ts;
   clock_gettime (CLOCK_MONOTONIC, &ts);
   return ts.tv_sec + 1e-9 * ts.tv_nsec;
+}
+
+/* What to advise when the integrator ran out of steps between t0 and
+ * target (stopped at t): more steps help while the steps keep their
+ * length (the last one at least a tenth of the mean since t0); when the
+ * step has collapsed far below that mean, the cause is in the network. */
+static void too_much_work_advice (void *mem, double t0, double t,
+                                  double target, long maxsteps, char *buf,
+                                  size_t len)
+{
+  double h = 0;
+  CVodeGetLastStep (mem, &h);
+  double mean = (t - t0) / (double) maxsteps;
+  if (h > 0 && h >= 0.1 * mean)
+    snprintf (buf, len, "; the steps were %.3g s long, %.3g s remain to "
+              "t = %.6g s: raise maxsteps (now %ld, at most %.3g needed at "
+              "that step) or output more often (\"dt\")", h, target - t,
+              target, maxsteps, ceil ((target - t) / h));
+  else
+    snprintf (buf, len, "; the step has fallen to %.3g s (mean %.3g s), so "
+              "more steps would not help: the state named is changing "
+              "abruptly (a valve or pump switching back and forth, a "
+              "controller saturating, data far from plant values); check "
+              "its data, or give the network a larger \"smooth\" band", h,
+              mean);
 }
 
 /* CVodeGetReturnFlagName hands back a string it malloc'ed (SUNDIALS 6.4,
@@ -298,7 +376,7 @@ static const char *flag_name (int flag, char *buf, size_t len)
 
 /* the state whose weighted local error is largest: where trouble is */
 static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
-                      double t)
+                      double t0, double t, double target, long maxsteps)
 {
   N_Vector ele = N_VClone (y), w = N_VClone (y);
   int worst = -1;
@@ -323,10 +401,12 @@ static void diagnose (vn_net *net, void *mem, N_Vector y, int flag,
                 vn_state_var (net, worst), net->u[u].k->name,
                 net->u[u].name, N_VGetArrayPointer (y)[worst]);
     }
+  char advice[400] = "";
+  if (flag == CV_TOO_MUCH_WORK)
+    too_much_work_advice (mem, t0, t, target, maxsteps, advice,
+                          sizeof advice);
   vn_fail (net, VN_ESOLVER, "the integrator stopped at t = %.6g s (%s)%s%s",
-           t, FLAG_NAME (flag), where,
-           flag == CV_TOO_MUCH_WORK ? "; the network may be very stiff or "
-           "chattering: check valve and pump data, or raise maxsteps" : "");
+           t, FLAG_NAME (flag), where, advice);
   if (ele)
     N_VDestroy (ele);
   if (w)
@@ -371,6 +451,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
                     double *tr, int *rooted, vn_sim_stats *stats)
 {
   vn_net *net = S->net;
+  double t0 = *tr;
   int flag = CVode (mem, target, y, tr, CV_NORMAL);
   *rooted = 0;
   if (flag < 0)
@@ -379,7 +460,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
       if (S->interrupted)
         return vn_fail (net, VN_EINTR, "simulate: interrupted at t = %.6g s",
                         *tr);
-      diagnose (net, mem, y, flag, *tr);
+      diagnose (net, mem, y, flag, t0, *tr, target, S->maxsteps);
       if (S->cvmsg[0] && !S->rhs_fail)
         {
           size_t n = strlen (net->msg);
@@ -394,7 +475,7 @@ static int advance (sim *S, void *mem, double target, N_Vector y,
   int st = switch_at_root (S, mem, *tr, N_VGetArrayPointer (y));
   if (st)
     return st;
-  if ((flag = restart (S, mem, *tr, y)) != CV_SUCCESS)
+  if ((flag = restart (S, mem, *tr, y, stats)) != CV_SUCCESS)
     return vn_fail (net, VN_ESOLVER, "simulate: restart after a switch at "
                     "t = %g failed (%s)", *tr, FLAG_NAME (flag));
   stats->restarts++;
@@ -436,7 +517,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   if (o)
     opt = *o;
   double rtol = opt.rtol > 0 ? opt.rtol : 1e-6;
-  double atol = opt.atol > 0 ? opt.atol : 1e-8;
+  double atol = opt.atol > 0 ? opt.atol : 0;   /* 0: per state */
   long maxsteps = opt.maxsteps > 0 ? opt.maxsteps : 100000;
   int solver = opt.solver ? opt.solver
                : (net->nx <= VN_DENSE_MAX ? VN_SOLVER_DENSE : VN_SOLVER_KLU);
@@ -465,11 +546,12 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   memset (&S, 0, sizeof S);
   S.net = net;
   S.sens = sens;
+  S.maxsteps = maxsteps;
   S.rec.nodes_only = 1;
   if (sens)
     sens->yrow = NULL;
   SUNContext ctx = NULL;
-  N_Vector y = NULL;
+  N_Vector y = NULL, atolv = NULL;
   SUNMatrix J = NULL;
   SUNLinearSolver LS = NULL;
   void *mem = NULL;
@@ -573,6 +655,16 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       goto done;
     }
   memcpy (N_VGetArrayPointer (y), x0, (size_t) net->nx * sizeof (double));
+  if (!(atol > 0))
+    {
+      if (!(atolv = N_VClone (y)))
+        {
+          st = vn_fail (net, VN_ENOMEM, "simulate: cannot allocate the "
+                        "solver");
+          goto done;
+        }
+      state_abstol (net, N_VGetArrayPointer (atolv));
+    }
   /* No solver constraints on the volumes: the liquid gate (link.c) already
    * stops outflow from an empty tank, and constraint checks cost about
    * 15 % of a large run (bench/). */
@@ -592,7 +684,9 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       goto done;
     }
   if ((flag = CVodeInit (mem, cv_rhs, tout[0], y)) != CV_SUCCESS
-      || (flag = CVodeSStolerances (mem, rtol, atol)) != CV_SUCCESS
+      || (flag = (atol > 0 ? CVodeSStolerances (mem, rtol, atol)
+                           : CVodeSVtolerances (mem, rtol, atolv)))
+         != CV_SUCCESS
       || (flag = CVodeSetUserData (mem, &S)) != CV_SUCCESS
       || (flag = CVodeSetErrHandlerFn (mem, cv_err, &S)) != CV_SUCCESS
       || (flag = CVodeSetMaxNumSteps (mem, maxsteps)) != CV_SUCCESS
@@ -688,7 +782,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
           /* restart past the breakpoint: the inputs may jump here */
           b++;
           net->seg_end = b < nbp ? bp[b] : tout[nt - 1];
-          if ((flag = restart (&S, mem, seg, y)) != CV_SUCCESS)
+          if ((flag = restart (&S, mem, seg, y, stats)) != CV_SUCCESS)
             {
               st = vn_fail (net, VN_ESOLVER, "simulate: restart at t = %g "
                             "failed (%s)", seg, FLAG_NAME (flag));
@@ -700,16 +794,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   stats->t_reached = t;
 stats:
   stats->wall = now () - t0w;
-  {
-    long v;
-    if (CVodeGetNumSteps (mem, &v) == CV_SUCCESS) stats->steps = v;
-    if (CVodeGetNumRhsEvals (mem, &v) == CV_SUCCESS) stats->rhs = v;
-    if (CVodeGetNumJacEvals (mem, &v) == CV_SUCCESS) stats->jac = v;
-    if (CVodeGetNumLinSolvSetups (mem, &v) == CV_SUCCESS) stats->setups = v;
-    if (CVodeGetNumErrTestFails (mem, &v) == CV_SUCCESS) stats->errfails = v;
-    if (CVodeGetNumNonlinSolvConvFails (mem, &v) == CV_SUCCESS)
-      stats->convfails = v;
-  }
+  add_counts (mem, stats);
 done:
   blk_flush (&S.out);
   net->seg_end = INFINITY;
@@ -722,6 +807,8 @@ done:
     SUNMatDestroy (J);
   if (y)
     N_VDestroy (y);
+  if (atolv)
+    N_VDestroy (atolv);
   if (ctx)
     SUNContext_Free (&ctx);
   free (bp);

@@ -61,4 +61,34 @@ static inline double vn_gate (double s, double d, double *dgds)
   return r * r * (3.0 - 2.0 * r);
 }
 
+/* The liquid gate on the liquid s above a nozzle, band d: r (2 - r) for
+ * 0 < r = s/d < 1, 1 above.  It opens with a finite slope, so a tank
+ * drawn down to a nozzle approaches it exponentially (a hyperbolic rest
+ * point), not along s^2.  Below the nozzle it is 0, except below empty
+ * (`dry`, s then the deficit, a solver excursion): there it continues as
+ * 2 r, reversing the flow in proportion, so empty attracts from both
+ * sides with one slope at a bottom nozzle. */
+static inline double vn_gate_liquid (double s, double d, int dry,
+                                     double *dgds)
+{
+  double r = s / d;
+  if (r >= 1)
+    {
+      *dgds = 0;
+      return 1;
+    }
+  if (r <= 0 && !dry)
+    {
+      *dgds = 0;
+      return 0;
+    }
+  if (r <= 0)
+    {
+      *dgds = 2.0 / d;
+      return 2.0 * r;
+    }
+  *dgds = 2.0 * (1.0 - r) / d;
+  return r * (2.0 - r);
+}
+
 #endif

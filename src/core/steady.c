@@ -480,8 +480,39 @@ static int check_outlets (vn_net *net)
   for (int i = 0; i < nu && bad < 0; i++)
     if (is_tank (net, i) && !dr[i] && in[i] > 0)
       bad = i;
-  int st = VN_OK;
+  /* the tank that fills is where that liquid ends up: follow links and
+   * spills downstream (every tank there is undrained too) to a tank with
+   * no way on, or round a loop back to one already seen */
+  int fill = bad;
   if (bad >= 0)
+    {
+      memset (dr, 0, (size_t) nu);
+      for (int moved = 1; moved;)
+        {
+          moved = 0;
+          dr[fill] = 1;
+          for (int i = 0; i < nu && !moved; i++)
+            {
+              const vn_unit *u = &net->u[i];
+              int s = u->ref[0], d = u->ref[1];
+              if (u->k == &vn_kind_tank && has_rim (u) && s >= 0
+                  && i == fill && !dr[s])
+                fill = s, moved = 1;
+              else if (u->k->role == VN_ROLE_LINK && u->k != &vn_kind_feed
+                       && s == fill && is_tank (net, d) && !dr[d])
+                fill = d, moved = 1;
+            }
+        }
+    }
+  int st = VN_OK;
+  if (bad >= 0 && fill != bad)
+    st = vn_fail (net, VN_ENOSTEADY, "tank \"%s\" has no outlet: liquid "
+                  "fed to tank \"%s\" flows on into it, and no free "
+                  "discharge, boundary, draw-off or spill over a rim can be "
+                  "reached from it, so its volume keeps rising; add an "
+                  "outlet or give it a rim", net->u[fill].name,
+                  net->u[bad].name);
+  else if (bad >= 0)
     st = vn_fail (net, VN_ENOSTEADY, "tank \"%s\" has no outlet: no free "
                   "discharge, boundary, draw-off or spill over a rim can be "
                   "reached from it, yet liquid flows in, so its volume keeps "
@@ -604,10 +635,17 @@ static int diagnose (ss *S, int st, double tsim)
                       strncmp (why, "steady: ", 8) ? why : why + 8);
     }
   if (where >= S->nx)
-    return vn_fail (net, VN_ENOSTEADY, "the targets cannot be met with the "
-                    "adjusted inputs: target %d is missed by %g (the "
-                    "inputs may be at their limits)", where - S->nx + 1,
-                    S->F[where]);
+    {
+      int k = where - S->nx, yi = S->o->ytgt[k];
+      const vn_unit *u = &net->u[vn_output_unit (net, yi)];
+      int o = yi - u->yoff;
+      return vn_fail (net, VN_ENOSTEADY, "the targets cannot be met with "
+                      "the adjusted inputs: target %d, %s.%s = %g (%s), is "
+                      "missed by %g (the inputs may be at their limits)",
+                      k + 1, u->name, o < u->k->nout ? u->k->out[o] : "?",
+                      S->o->target[k],
+                      o < u->k->nout ? u->k->ounit[o] : "", S->F[where]);
+    }
   return st;
 }
 

@@ -9,10 +9,20 @@
  *   table       strapping table of (level, volume), linear between points
  * Spill: Francis weir, SI, Q = 1.84 (L - 0.1 n H) H^1.5 (Francis, Lowell
  * Hydraulic Experiments, 1855).
- * Beyond the top of a closed vessel, and below zero volume (a solver
- * excursion), the level continues linearly so level(V) stays invertible;
- * dV/dlevel is floored at 1 % of the largest plan area so the Jacobian
- * stays finite where a round vessel's surface shrinks to a line. */
+ * Where a round vessel's plan area vanishes (the apex of a cone, the
+ * bottom of a sphere or lying cylinder, and the top of the last two) the
+ * exact level has an infinite slope dlevel/dV, so any flow gated on the
+ * level (liquid gate, pump suction) would be a non-Lipschitz function of
+ * the volume: the integrator steps over the band and a dry tank drifts
+ * below empty.  In a band of 1e-3 of the vessel's height the level is
+ * instead a quadratic in the volume from the apex (exact level and slope
+ * at the band's edge, finite slope at the apex), so near empty every
+ * vessel behaves like a prism of finite area.  Below zero volume (a
+ * solver excursion within tolerance) and beyond the top of a closed
+ * vessel the level continues linearly so level(V) stays invertible:
+ * below empty with the vessel's largest plan area, so a volume within
+ * the integrator's tolerance (scaled by that area) is a level within
+ * its level tolerance. */
 #include <math.h>
 #include "vn_internal.h"
 
@@ -23,6 +33,10 @@ enum { PRISM = 0, HORIZ = 1, SPHERE = 2, CONE = 3, TABLE = 4 };
 /* derived constants in u->d */
 enum { D_A, D_R, D_L, D_VTOP, D_HTOP, D_AMAX, D_RIM, D_CREST };
 #define D_THERMAL 8   /* 1 when the network is thermal (for state names) */
+/* the apex band of a round vessel: its level hb, volume and area there */
+enum { D_HB = 9, D_VB = 10, D_AB = 11 };
+#define BAND 1e-3     /* band height over the vessel's height */
+#define GATE_AREA 1e-2  /* least gate area over the largest plan area */
 
 static const vn_param_info par[NPAR] = {
   {"shape", 0, 0, 4, "code", VN_P_CODE},
@@ -96,11 +110,41 @@ static double vol_at (const vn_unit *u, int shape, double h, double *area)
     }
 }
 
+/* The bottom (and, for a sphere or lying cylinder, the top) band of a
+ * round vessel, where its plan area vanishes: level = a y + b y^2 in the
+ * volume y measured from the apex, matching the exact level and slope at
+ * the band's edge hb and passing through the apex with the finite slope
+ * a.  dlevel/dV stays bounded, so every flow gated on the level is a
+ * smooth function of the volume near empty (as in a prism) and the
+ * analytic Jacobian is exact there. */
+static void band_coef (const vn_unit *u, double *a, double *b)
+{
+  const double *d = u->d;
+  *a = 2 * d[D_HB] / d[D_VB] - 1 / d[D_AB];
+  *b = (1 / d[D_AB] - d[D_HB] / d[D_VB]) / d[D_VB];
+}
+
+static int has_top_band (int shape)
+{
+  return shape == HORIZ || shape == SPHERE;
+}
+
+/* Area of the linear continuation below empty, and above the top. */
+static double area_below (const vn_unit *u)
+{
+  return u->d[D_AMAX];
+}
+
+static double area_above (const vn_unit *u, int shape)
+{
+  return shape == CONE ? u->d[D_AMAX] : 0.01 * u->d[D_AMAX];
+}
+
 /* Level and dlevel/dV from the volume. */
 static double level_of (const vn_unit *u, int shape, double V, double *dldV)
 {
   const double *d = u->d;
-  double amin = 0.01 * d[D_AMAX], a;
+  double a;
   if (shape == PRISM)
     {
       *dldV = 1 / d[D_A];
@@ -124,14 +168,30 @@ static double level_of (const vn_unit *u, int shape, double V, double *dldV)
     }
   if (V <= 0)
     {
-      *dldV = 1 / amin;
-      return V / amin;
+      /* a solver excursion below empty: the reference area, so a volume
+       * error within the integrator's tolerance is a level error within
+       * its level tolerance */
+      *dldV = 1 / area_below (u);
+      return V / area_below (u);
     }
   if (V >= d[D_VTOP])
     {
-      double atop = shape == CONE ? d[D_AMAX] : amin;
+      double atop = area_above (u, shape);
       *dldV = 1 / atop;
       return d[D_HTOP] + (V - d[D_VTOP]) / atop;
+    }
+  double ca, cb;
+  band_coef (u, &ca, &cb);
+  if (V < d[D_VB])
+    {
+      *dldV = ca + 2 * cb * V;
+      return (ca + cb * V) * V;
+    }
+  if (has_top_band (shape) && V > d[D_VTOP] - d[D_VB])
+    {
+      double y = d[D_VTOP] - V;
+      *dldV = ca + 2 * cb * y;
+      return d[D_HTOP] - (ca + cb * y) * y;
     }
   double h;
   if (shape == CONE)
@@ -164,11 +224,21 @@ static double level_of (const vn_unit *u, int shape, double V, double *dldV)
         }
       vol_at (u, shape, h, &a);
     }
-  *dldV = 1 / fmax (a, amin);
+  /* outside the bands the area is at least that at the band's edge */
+  *dldV = 1 / fmax (a, d[D_AB]);
   return h;
 }
 
-/* Volume held at level h (for initial states), continuing as level_of. */
+/* Volume y above the apex at level h inside a band (the inverse of
+ * a y + b y^2 on its rising branch). */
+static double band_volume (const vn_unit *u, double h)
+{
+  double a, b;
+  band_coef (u, &a, &b);
+  return 2 * h / (a + sqrt (fmax (0, a * a + 4 * b * h)));
+}
+
+/* Volume held at level h (for initial states), the inverse of level_of. */
 static double volume_of (const vn_unit *u, int shape, double h)
 {
   const double *d = u->d;
@@ -187,11 +257,203 @@ static double volume_of (const vn_unit *u, int shape, double h)
       return d[D_A] * h;
     }
   if (h >= d[D_HTOP])
+    return d[D_VTOP] + (h - d[D_HTOP]) * area_above (u, shape);
+  if (h <= 0)
+    return h * area_below (u);
+  if (h < d[D_HB])
+    return band_volume (u, h);
+  if (has_top_band (shape) && h > d[D_HTOP] - d[D_HB])
+    return d[D_VTOP] - band_volume (u, d[D_HTOP] - h);
+  return vol_at (u, shape, h, &a);
+}
+
+/* The band of a round vessel: a fixed fraction of its height, so the
+ * level map scales with the vessel (and its parameter derivatives follow
+ * from that scaling). */
+static void set_band (vn_unit *u, int shape)
+{
+  double *d = u->d, ab;
+  d[D_HB] = BAND * d[D_HTOP];
+  d[D_VB] = vol_at (u, shape, d[D_HB], &ab);
+  d[D_AB] = ab;
+}
+
+/* Volume, plan area and its slope dA/dlevel of the level map at level z
+ * (a nozzle's height): the inverse of level_of, branch by branch. */
+static double map_at (const vn_unit *u, int shape, double z, double *A,
+                      double *dA)
+{
+  const double *d = u->d;
+  double a, b, V;
+  band_coef (u, &a, &b);
+  if (z < 0)
     {
-      double atop = shape == CONE ? d[D_AMAX] : 0.01 * d[D_AMAX];
-      return d[D_VTOP] + (h - d[D_HTOP]) * atop;
+      *A = area_below (u);
+      *dA = 0;
+      return z * *A;
     }
-  return vol_at (u, shape, fmax (h, 0), &a);
+  if (z >= d[D_HTOP])
+    {
+      *A = area_above (u, shape);
+      *dA = 0;
+      return d[D_VTOP] + (z - d[D_HTOP]) * *A;
+    }
+  if (z < d[D_HB])
+    {
+      V = band_volume (u, z);
+      *A = 1 / (a + 2 * b * V);
+      *dA = -2 * b * *A * *A * *A;
+      return V;
+    }
+  if (has_top_band (shape) && z > d[D_HTOP] - d[D_HB])
+    {
+      double y = band_volume (u, d[D_HTOP] - z);
+      *A = 1 / (a + 2 * b * y);
+      *dA = 2 * b * *A * *A * *A;
+      return d[D_VTOP] - y;
+    }
+  V = vol_at (u, shape, z, A);
+  if (shape == SPHERE)
+    *dA = VN_PI * (2 * d[D_R] - 2 * z);
+  else if (shape == CONE)
+    *dA = 2 * *A / z;
+  else
+    {
+      double c = sqrt (fmax (0, 2 * d[D_R] * z - z * z));
+      *dA = c > 0 ? 2 * d[D_L] * (d[D_R] - z) / c : 0;
+    }
+  return V;
+}
+
+/* The largest plan area: of a prism, of a round vessel's widest section,
+ * of the steepest segment of a strapping table. */
+double vn_tank_area_ref (const vn_net *net, const vn_unit *u)
+{
+  if ((int) net->p[u->poff + SHAPE] == TABLE)
+    {
+      double a = 0;
+      for (int i = 1; i < u->ntab; i++)
+        a = fmax (a, (u->tab[2 * i + 1] - u->tab[2 * i - 1])
+                     / (u->tab[2 * i] - u->tab[2 * i - 2]));
+      return a;
+    }
+  return u->d[D_AMAX];
+}
+
+/* Below empty: the deficit V / Ag(0) as an equivalent level (prism: the
+ * level itself; table: over its first segment's area; round: over the
+ * gate area at the bottom). */
+static double deficit (const vn_net *net, const vn_unit *u, int shape,
+                       const vn_node *nd, int pc_z, vn_lf *de)
+{
+  const double *d = u->d;
+  double V = nd->V, e;
+  if (pc_z >= 0)
+    vn_lf_p (de, pc_z, 0);
+  if (shape == PRISM)
+    {
+      vn_lf_axpy (de, 1, &nd->dH);
+      vn_lf_p (de, nd->pc_base, -1);
+      return nd->level;
+    }
+  if (shape == TABLE)
+    {
+      double a1 = (u->tab[3] - u->tab[1]) / (u->tab[2] - u->tab[0]);
+      vn_lf_x (de, u->xoff, 1 / a1);
+      return V / a1;
+    }
+  /* the gate area at the bottom, as in vn_tank_above at z = 0, so the
+   * gate's slope is the same on both sides of empty; both candidates
+   * scale with the plan (D^2, or D L) */
+  double A0, dA0, D = net->p[u->poff + DIAM];
+  map_at (u, shape, 0, &A0, &dA0);
+  double Ag = fmax (A0, GATE_AREA * d[D_AMAX]);
+  e = V / Ag;
+  vn_lf_x (de, u->xoff, 1 / Ag);
+  if (shape == HORIZ)
+    {
+      vn_lf_p (de, vn_pcol (u, DIAM), -e / D);
+      vn_lf_p (de, vn_pcol (u, LEN), -e / d[D_L]);
+    }
+  else
+    {
+      vn_lf_p (de, vn_pcol (u, DIAM), -2 * e / D);
+      if (shape == CONE)
+        vn_lf_p (de, vn_pcol (u, HEIGHT), 0);
+    }
+  return e;
+}
+
+/* Liquid above a nozzle at level z (above the base) of a tank, as an
+ * equivalent level e, for the liquid gate and pump suction.  Prism and
+ * table: e = level - z.  Round vessels: e = (V - V(z)) / Ag with
+ * Ag = max(A(z), GATE_AREA Amax), so near a nozzle where the plan area
+ * vanishes (a cone's apex, a sphere's bottom) the gate still closes over a
+ * volume of at least GATE_AREA Amax times its band: it closes smoothly in
+ * volume, at a rate the integrator resolves, instead of over a sliver of
+ * volume far below its tolerance.  Elsewhere Ag = A(z) and e is the level
+ * above the nozzle to first order.  Below empty (V < 0, *dry set) e is
+ * the deficit V / Ag(0) whatever the nozzle, for the gate's reversal.
+ * Derivatives: the state, the nozzle height (column pc_z) and the
+ * vessel's dimensions (scaling, as in node ()). */
+double vn_tank_above (const vn_net *net, const vn_node *nd, double z,
+                      int pc_z, vn_lf *de, int *dry)
+{
+  const vn_unit *u = &net->u[nd - net->nd];
+  const double *d = u->d;
+  int shape = (int) net->p[u->poff + SHAPE];
+  if (dry)
+    *dry = nd->V < 0;
+  if (nd->V < 0)
+    return deficit (net, u, shape, nd, pc_z, de);
+  if (shape == PRISM || shape == TABLE)
+    {
+      vn_lf_axpy (de, 1, &nd->dH);
+      vn_lf_p (de, nd->pc_base, -1);
+      if (pc_z >= 0)
+        vn_lf_p (de, pc_z, -1);
+      return nd->level - z;
+    }
+  double Az, dAz, Vz = map_at (u, shape, z, &Az, &dAz);
+  double Ak = GATE_AREA * d[D_AMAX];
+  int useA = Az > Ak;
+  double Ag = useA ? Az : Ak, e = (nd->V - Vz) / Ag;
+  if (!de)
+    return e;
+  vn_lf_x (de, u->xoff, 1 / Ag);
+  if (pc_z >= 0)
+    vn_lf_p (de, pc_z, -Az / Ag - (useA ? e * dAz / Ag : 0));
+  /* dVz/dp and dAg/dp at fixed z for each dimension */
+  double D = net->p[u->poff + DIAM], dVD, dAD, dVo = 0, dAo = 0;
+  int pco;
+  if (shape == SPHERE)
+    {
+      dVD = (3 * Vz - z * Az) / D;
+      dAD = useA ? (2 * Az - z * dAz) / D : 2 * Ak / D;
+      pco = -1;
+    }
+  else if (shape == HORIZ)
+    {
+      double L = d[D_L];
+      dVD = (2 * Vz - z * Az) / D;
+      dAD = useA ? (Az - z * dAz) / D : Ak / D;
+      dVo = Vz / L;
+      dAo = Ag / L;
+      pco = vn_pcol (u, LEN);
+    }
+  else
+    {
+      double H = d[D_HTOP];
+      dVD = 2 * Vz / D;
+      dAD = 2 * Ag / D;
+      dVo = (Vz - z * Az) / H;
+      dAo = useA ? -z * dAz / H : 0;
+      pco = vn_pcol (u, HEIGHT);
+    }
+  vn_lf_p (de, vn_pcol (u, DIAM), -dVD / Ag - e * dAD / Ag);
+  if (pco >= 0)
+    vn_lf_p (de, pco, -dVo / Ag - e * dAo / Ag);
+  return e;
 }
 
 static int check (vn_net *net, vn_unit *u)
@@ -225,6 +487,7 @@ static int check (vn_net *net, vn_unit *u)
       d[D_HTOP] = D;
       d[D_AMAX] = D * d[D_L];
       d[D_VTOP] = VN_PI * d[D_R] * d[D_R] * d[D_L];
+      set_band (u, shape);
       break;
     case SPHERE:
       if (!gd)
@@ -232,6 +495,7 @@ static int check (vn_net *net, vn_unit *u)
       d[D_HTOP] = D;
       d[D_AMAX] = VN_PI * d[D_R] * d[D_R];
       d[D_VTOP] = 4 * VN_PI * d[D_R] * d[D_R] * d[D_R] / 3;
+      set_band (u, shape);
       break;
     case CONE:
       if (!gd || !vn_given (net, u, HEIGHT))
@@ -240,6 +504,7 @@ static int check (vn_net *net, vn_unit *u)
       d[D_HTOP] = vn_par (net, u, HEIGHT);
       d[D_AMAX] = VN_PI * d[D_R] * d[D_R];
       d[D_VTOP] = d[D_AMAX] * d[D_HTOP] / 3;
+      set_band (u, shape);
       break;
     case TABLE:
       if (u->ntab < 2)
@@ -439,28 +704,24 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
     }
   else if (shape != TABLE)
     {
-      /* round vessels: dlevel/dp = -(dV/dp at fixed level) / (dV/dlevel),
-       * inside the vessel's height (0 in the linear extensions) */
-      double R = u->d[D_R], h = l, in = V > 0 && V < u->d[D_VTOP];
-      double dVdD = 0, dVdL = 0, dVdH = 0;
-      if (in && shape == HORIZ)
+      /* round vessels: the level map is h = S phi(V / (scales)), the
+       * same function scaled (bands and continuations too), so at fixed
+       * volume dh/dS = (h - n V dh/dV) / S for a length S entering the
+       * volume scale as S^n: sphere D^3; cylinder D^2 L; cone D^2 H with
+       * the level scaled by H. */
+      double D = net->p[u->poff + DIAM], s = V * dldV;
+      if (shape == SPHERE)
+        vn_lf_p (dH, vn_pcol (u, DIAM), (l - 3 * s) / D);
+      else if (shape == HORIZ)
         {
-          double c = sqrt (fmax (0, 2 * R * h - h * h));
-          dVdD = u->d[D_L] * (R * acos ((R - h) / R) - c);
-          dVdL = V / u->d[D_L];
+          vn_lf_p (dH, vn_pcol (u, DIAM), (l - 2 * s) / D);
+          vn_lf_p (dH, vn_pcol (u, LEN), -s / u->d[D_L]);
         }
-      else if (in && shape == SPHERE)
-        dVdD = VN_PI * h * h / 2;
-      else if (in && shape == CONE)
+      else
         {
-          dVdD = V / R;
-          dVdH = -2 * V / u->d[D_HTOP];
+          vn_lf_p (dH, vn_pcol (u, DIAM), -2 * s / D);
+          vn_lf_p (dH, vn_pcol (u, HEIGHT), (l - s) / u->d[D_HTOP]);
         }
-      vn_lf_p (dH, vn_pcol (u, DIAM), -dVdD * dldV);
-      if (shape == HORIZ)
-        vn_lf_p (dH, vn_pcol (u, LEN), -dVdL * dldV);
-      if (shape == CONE)
-        vn_lf_p (dH, vn_pcol (u, HEIGHT), -dVdH * dldV);
     }
   vn_lf_p (dH, vn_pcol (u, BASE), 1);
   /* spill over the rim (Francis) */
@@ -488,13 +749,16 @@ static void node (vn_net *net, vn_unit *u, const double *x, vn_node *nd)
         vn_lf_p (dq, vn_pcol (u, DIAM), -dqdH);   /* rim = top */
       else if (shape == CONE)
         vn_lf_p (dq, vn_pcol (u, HEIGHT), -dqdH);
-      /* the crest, given or (prism) the perimeter of a round plan */
+      /* the crest: given, else the perimeter of a round plan (or of the
+       * top of a sphere or cone), or a lying cylinder's length */
       if (vn_given (net, u, CREST))
         vn_lf_p (dq, vn_pcol (u, CREST), dqdL);
       else if (shape == PRISM && vn_given (net, u, AREA))
         vn_lf_p (dq, vn_pcol (u, AREA), dqdL * sqrt (VN_PI / u->d[D_A]));
-      else if (shape == PRISM)
-        vn_lf_p (dq, vn_pcol (u, DIAM), dqdL * VN_PI);
+      else if (shape == PRISM || shape == SPHERE || shape == CONE)
+        vn_lf_p (dq, vn_pcol (u, DIAM), dqdL * VN_PI);   /* pi D */
+      else if (shape == HORIZ)
+        vn_lf_p (dq, vn_pcol (u, LEN), dqdL);            /* the length */
     }
 }
 

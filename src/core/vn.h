@@ -119,7 +119,8 @@ int vn_jac_csc (vn_net *net, double t, const double *x, long *nnz,
 enum { VN_SOLVER_AUTO = 0, VN_SOLVER_DENSE = 1, VN_SOLVER_KLU = 2 };
 
 typedef struct vn_sim_opts {
-  double rtol, atol;       /* defaults 1e-6, 1e-8 when <= 0 */
+  double rtol, atol;       /* rtol default 1e-6; atol <= 0: per state,
+                              scaled to capacity (simulate.c) */
   int solver;              /* VN_SOLVER_* */
   long maxsteps;           /* per output interval, default 100000 */
   double hmax;             /* 0 = no limit */

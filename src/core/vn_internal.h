@@ -235,6 +235,13 @@ double vn_link_dh (const vn_unit *u, const vn_node *s, const vn_node *d,
 double vn_link_gate (const vn_net *net, const vn_node *s, const vn_node *d,
                      double dh, double outlet, double inlet, int pc_outlet,
                      int pc_inlet, double band, vn_lf *dg);
+/* liquid above a nozzle at level z of a tank, as an equivalent level
+ * (tank.c), with its derivative; *dry (may be NULL) set below empty */
+double vn_tank_above (const vn_net *net, const vn_node *nd, double z,
+                      int pc_z, vn_lf *de, int *dry);
+/* the largest plan area of a tank (m2), the scale of its volume */
+double vn_tank_area_ref (const vn_net *net, const vn_unit *u);
+double vn_link_dry (const vn_node *s, const vn_node *d, vn_lf *dq);
 int vn_link_check_ends (vn_net *net, vn_unit *u);
 void vn_link_flow_output (vn_net *net, vn_unit *u, const vn_node *nd,
                           const double *x, double *y, vn_lf *dy);

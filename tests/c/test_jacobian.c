@@ -79,10 +79,12 @@ static int movable (const vn_net *net, int kind, int slot, int pidx,
   /* The core gives level sensitivities to the plan of a prism only; the
    * geometry of round vessels is checked on its own in
    * round_geometry (), so these columns do not hide the other ones. */
+  /* round vessels: diameter, length, height enter the level map and the
+   * liquid gate exactly, so they are checked like any other input */
   if (round && (strcmp (pi->name, "diameter") == 0
                 || strcmp (pi->name, "length") == 0
                 || strcmp (pi->name, "height") == 0))
-    return 0;
+    return 1;
   for (int i = 0; fixed[i]; i++)
     if (strcmp (pi->name, fixed[i]) == 0)
       return -1;   /* only when given */
@@ -640,6 +642,119 @@ static void round_geometry (void)
   vn_net_free (net);
 }
 
+/* Near empty and full, where a round vessel's plan area vanishes: the
+ * apex and top bands of the level map, the liquid gate on the volume
+ * above a nozzle (both of its area branches), a nozzle above the top,
+ * and volumes below empty (the gate's reversal at a bottom nozzle and the
+ * return from below empty).  States are set away from the kinks at empty
+ * and at the band edges by more than the difference step. */
+#define PI_ 3.14159265358979323846
+static void near_empty (void)
+{
+  vt_net b;
+  int t, r;
+  double x[NMAX];
+
+  /* sphere D 4: apex band 4 mm (volume about 1e-4 m3), orifice to a
+   * lower tank, gate partly open */
+  vt_init (&b);
+  t = tank (&b, "s1", S_SPHERE, 0);
+  vt_set (&b, t, "diameter", 4);
+  r = prism (&b, "r1", 3, 0.5);
+  vt_set (&b, r, "base", -2);
+  orifice (&b, "o1", t, r, 0.02);
+  for (int i = 0; i < NMAX; i++)
+    x[i] = NAN;
+  x[0] = 5e-5;
+  check_net ("sphere in its apex band, gate partly open", &b, x);
+  x[0] = -1e-3;
+  check_net ("sphere below empty: reversal and return", &b, x);
+
+  /* sphere near its top: top band and a spill at the default rim */
+  vt_init (&b);
+  t = tank (&b, "s1", S_SPHERE, 3.9);
+  vt_set (&b, t, "diameter", 4);
+  orifice (&b, "o1", t, -1, 0.02);
+  x[0] = 4.0 / 3.0 * PI_ * 8 - 5e-5;
+  check_net ("sphere in its top band", &b, x);
+  x[0] = 4.0 / 3.0 * PI_ * 8 + 2e-3;
+  check_net ("sphere above its top, spilling", &b, x);
+
+  /* cone D 40 H 60: apex band 6 cm (2.5e-5 m3); fixed pump, gate area
+   * floored at 1 % of the top */
+  vt_init (&b);
+  t = tank (&b, "c1", S_CONE, 0);
+  vt_set (&b, t, "diameter", 40);
+  vt_set (&b, t, "height", 60);
+  r = prism (&b, "r1", 3, 0.5);
+  {
+    int p = vt_unit (&b, "pump", "p1", t, r);
+    vt_set (&b, p, "flow", 0.01);
+  }
+  x[0] = 1e-5;
+  check_net ("cone in its apex band, fixed pump", &b, x);
+  x[0] = -2e-3;
+  check_net ("cone below empty, fixed pump reversed", &b, x);
+
+  /* cone: a nozzle inside the apex band and one higher up (gate area
+   * the plan area there), a draw-off feed */
+  vt_init (&b);
+  t = tank (&b, "c1", S_CONE, 0);
+  vt_set (&b, t, "diameter", 40);
+  vt_set (&b, t, "height", 60);
+  {
+    int o = orifice (&b, "o1", t, -1, 0.02);
+    vt_set (&b, o, "outlet", 0.03);
+    o = orifice (&b, "o2", t, -1, 0.01);
+    vt_set (&b, o, "outlet", 10);
+    int f = vt_unit (&b, "feed", "f1", -1, t);
+    vt_set (&b, f, "flow", -0.001);
+  }
+  /* V(10 m) = (pi/3)(20/60)^2 1000 = 116.355 m3; 1e-3 m3 above it */
+  x[0] = PI_ / 3 * (20.0 / 60) * (20.0 / 60) * 1000 + 1e-3;
+  check_net ("cone, nozzles in the apex band and at 10 m, draw-off", &b,
+             x);
+
+  /* horizontal cylinder D 2 L 4 in its apex band: valve to a lower
+   * tank, and a curve pump with a suction band */
+  vt_init (&b);
+  t = tank (&b, "h1", S_HORIZ, 0);
+  vt_set (&b, t, "diameter", 2);
+  vt_set (&b, t, "length", 4);
+  r = prism (&b, "r1", 3, 0.5);
+  vt_set (&b, r, "base", -2);
+  {
+    int v = vt_unit (&b, "valve", "v1", t, r);
+    vt_set (&b, v, "kv", 20);
+    vt_set (&b, v, "opening", 0.6);
+    int p = vt_unit (&b, "pump", "p1", t, r);
+    vt_set (&b, p, "shutoff", 10);
+    vt_set (&b, p, "k", 1e4);
+    vt_set (&b, p, "suction", 0.05);
+  }
+  x[0] = 2e-5;
+  check_net ("horizontal cylinder in its apex band, valve, curve pump",
+             &b, x);
+  x[0] = 0.3;
+  check_net ("horizontal cylinder, suction band partly open", &b, x);
+  x[0] = -4e-3;
+  check_net ("horizontal cylinder below empty", &b, x);
+
+  /* prism below empty: fixed pump out, orifice to waste, orifice in
+   * from a full tank */
+  vt_init (&b);
+  t = prism (&b, "t1", 2, 0);
+  r = prism (&b, "t2", 1, 1);
+  {
+    int p = vt_unit (&b, "pump", "p1", t, r);
+    vt_set (&b, p, "flow", 0.01);
+  }
+  orifice (&b, "o1", t, -1, 0.02);
+  orifice (&b, "o2", r, t, 0.02);
+  x[0] = -3e-3;
+  check_net ("prism below empty, pump, waste and inflow", &b, x);
+}
+
 int main (void)
 {
   shapes ();
@@ -649,5 +764,6 @@ int main (void)
   feeds ();
   links ();
   round_geometry ();
+  near_empty ();
   return vt_done ();
 }

@@ -28,8 +28,9 @@
  * Work is bounded: at most 4 output intervals, maxsteps 2000 per
  * interval, and a stop callback that ends a run after FZ_POLLS polls; the
  * steady search has 30 iterations.  Invariants that make a "crash":
- * statuses are VN_OK or a VN_E* code, a failure leaves a message, and a
- * run that succeeds gives finite states. */
+ * statuses are VN_OK or a VN_E* code, a failure leaves a message, a
+ * declared start is finite, balances at a finite state are finite or
+ * refused, and a run that succeeds gives finite states. */
 #ifndef VN_FUZZ_RUN_H
 #define VN_FUZZ_RUN_H
 
@@ -275,6 +276,12 @@ static void fz_derivatives (vn_net *net, const double *x)
   double *J = malloc ((size_t) nx * nx * sizeof *J);
   int st = vn_rhs (net, 0, x, f);
   FZ_STATUS (st, net, "vn_rhs");
+  int xfin = 1;
+  for (int i = 0; i < nx; i++)
+    xfin &= isfinite (x[i]) != 0;
+  for (int i = 0; st == VN_OK && xfin && i < nx; i++)
+    fz_check (isfinite (f[i]), "vn_rhs OK gives finite balances at a "
+              "finite state", st, net);
   st = vn_outputs (net, 0, x, y);
   FZ_STATUS (st, net, "vn_outputs");
   st = vn_jac_dense (net, 0, x, J);
@@ -417,6 +424,9 @@ static int fz_run (const uint8_t *data, size_t size)
   double *x0 = malloc ((size_t) nx * sizeof *x0);
   st = vn_initial_state (net, x0);
   FZ_STATUS (st, net, "vn_initial_state");
+  for (int i = 0; st == VN_OK && i < nx; i++)
+    fz_check (isfinite (x0[i]), "vn_initial_state OK gives a finite state",
+              st, net);
   if (!st)
     {
       uint8_t pf = fz_byte (&r);

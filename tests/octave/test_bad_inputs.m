@@ -78,13 +78,13 @@
 %!error <vn_boundary: boundary "B2": HEAD \(m\) is required> vn_boundary (net, "B2")
 
 ## ---- controllers and switches -------------------------------------
-%!error <vn_controller: unit "LC1": quantity "T1.colour": colour is not an output of tank "T1"; outputs: level, volume, head, spill> vn_controller (net, "LC1", "measure", "T1.colour", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2)
-%!error <vn_controller: unit "LC1": quantity "T1.level": level is not an input of tank "T1"> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "T1.level", "setpoint", 1, "gain", 2)
-%!error <vn_controller: unit "LC1": unknown option "colour"; allowed: measure, manipulate> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "colour", 3)
+%!error <vn_controller: controller "LC1": quantity "T1.colour": colour is not an output of tank "T1"; outputs: level, volume, head, spill> vn_controller (net, "LC1", "measure", "T1.colour", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2)
+%!error <vn_controller: controller "LC1": quantity "T1.level": level is not an input of tank "T1": a tank has no inputs; inputs in network "w": F1.flow, LV1.opening> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "T1.level", "setpoint", 1, "gain", 2)
+%!error <vn_controller: controller "LC1": unknown option "colour"; allowed: measure, manipulate> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "colour", 3)
 %!error <vn_switch: switch "LS1": ON and OFF set points are equal \(1\)> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "F1.flow", "on", 1, "off", 1)
 %!error <vn_switch: switch "LS1": VALUES must be \[off-value on-value\]> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 2, "off", 1, "values", [0 1 2])
 ## a range only the core checks, reported through vn_simulate
-%!error <vn_simulate: controller "LC1": reset must lie in \[1e-06, 1e\+12\] \(s\), got -300> vn_simulate (vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "reset", -300), [0 10])
+%!error <vn_controller: controller "LC1": RESET must lie in \[1e-06, 1e\+12\] \(s\), got -300> vn_simulate (vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "reset", -300), [0 10])
 
 ## ---- signals and simulation ---------------------------------------
 %!error <vn_signal: signal "F1.flow": "step" takes T0, BEFORE, AFTER; got 2 arguments> vn_signal ("F1.flow", "step", 10, 1)
@@ -110,3 +110,47 @@
 %!error <vn_simulate: U must be signals made by vn_signal> vn_simulate (net, [0 10], 3)
 %!error <vn_simulate: options come in name/value pairs> vn_simulate (net, [0 10], "dt")
 %!error <vn_steady: quantity "T9.flow": the network has no unit "T9"> vn_steady (net, "T9.flow", 1)
+
+## ---- refused at declaration, not later in vn_simulate ----------------
+%!error <vn_network: network "w2": SMOOTH must lie in \(0, 0.1\] \(m\), got 0.5> vn_network ("w2", "smooth", 0.5)
+%!error <vn_tank: tank "T3": AREA must lie in \[1e-09, 1e\+09\] \(m2\), got 1e\+10> vn_tank (net, "T3", "area", 1e10)
+%!error <vn_tank: tank "T3": LEVEL must lie in \[0, 100000\] \(m\), got 200000> vn_tank (net, "T3", "area", 1, "level", 2e5)
+%!error <vn_tank: tank "T3": RIM must lie in \[1e-06, 100000\] \(m\), got 200000> vn_tank (net, "T3", "area", 1, "rim", 2e5)
+%!error <vn_resistance: resistance "R1": R must lie in \[1e-12, 1e\+15\] \(s/m2\), got 1e\+20> vn_resistance (net, "R1", "T1", "", "r", 1e20)
+%!error <vn_controller: controller "LC1": RESET must lie in \[1e-06, 1e\+12\] \(s\), got 0> vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", "setpoint", 1, "gain", 2, "reset", 0)
+%!error <vn_switch: switch "LS1": ON must lie in \[-1e\+12, 1e\+12\] \(measured unit\), got 2e\+12> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 2e12, "off", 1)
+%!error <vn_switch: switch "LS1": OFF must lie in \[-1e\+12, 1e\+12\]> vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 1, "off", -3e12)
+
+## ---- loops ---------------------------------------------------------
+%!error <vn_controller: controller "FC1": MEASURE and MANIPULATE are both "F1.flow": a loop may not measure the very input it sets> vn_controller (net, "FC1", "measure", "F1.flow", "manipulate", "F1.flow", "setpoint", 0.01, "gain", 1)
+%!error <vn_switch: switch "LS1": MEASURE and MANIPULATE are both "F1.flow"> vn_switch (net, "LS1", "measure", "F1.flow", "manipulate", "F1.flow", "on", 1, "off", 0)
+%!test
+%! ## a signal on an input a switch sets: no advice to "drive its setpoint"
+%! sw = vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 2, "off", 1);
+%! try
+%!   vn_simulate (sw, [0 10], vn_signal ("LV1.opening", "step", 1, 0, 1));
+%!   error ("no error");
+%! catch err
+%!   assert (err.message, "vn_simulate: signal on LV1.opening: that input is driven by switch \"LS1\"; a switch sets it from its on and off levels; signals may drive only inputs no switch or controller sets");
+%! end_try_catch
+%! fail ("vn_simulate (ctl, [0 10], vn_signal (\"LV1.opening\", \"step\", 1, 0, 1))", "driven by controller \"LC1\"; drive the controller's setpoint instead");
+
+## ---- allowed lists hold what a user may type -------------------------
+%!test
+%! ## no core placeholders c1 .. c8 without species, no empty list
+%! try
+%!   vn_simulate (net, [0 1], vn_signal ("F1.colour", "step", 1, 0, 1));
+%! catch err
+%!   assert (err.message, "vn_simulate: quantity \"F1.colour\": colour is not an input of feed \"F1\"; allowed: flow");
+%! end_try_catch
+%! sp = vn_network ("s", "species", {"salt"});
+%! sp = vn_tank (sp, "T1", "area", 1);
+%! sp = vn_feed (sp, "F1", "T1", "flow", 0.01, "salt", 2);
+%! fail ("vn_steady (sp, \"F1.sugar\", 1)", "sugar is not an input of feed \"F1\"; allowed: flow, salt$");
+%! fail ("vn_linearize (net, [], {\"T1.area\"}, {\"T1.level\"})", "area is not an input of tank \"T1\": a tank has no inputs; inputs in network \"w\": F1.flow, LV1.opening, river.head");
+
+## ---- a tank that fills is named, not its source ----------------------
+%!error <vn_steady: tank "T2" has no outlet: liquid fed to tank "T1" flows on into it> vn_steady (vn_orifice (vn_tank (vn_tank (vn_feed (vn_tank (vn_network ("f"), "T1", "area", 1, "level", 1), "F1", "T1", "flow", 0.01), "T2", "area", 1), "T3", "area", 1), "O1", "T1", "T2", "coeff", 0.01))
+
+## ---- a missed target names its quantity ------------------------------
+%!error <vn_steady: the targets cannot be met with the adjusted inputs: target 1, T1.level = 5 \(m\), is missed by -4> vn_steady (vn_orifice (vn_feed (vn_tank (vn_network ("m"), "T1", "area", 2, "level", 1, "rim", 2), "F1", "T1", "flow", 0.01), "O1", "T1", "", "coeff", 0.01), "target", {"T1.level", 5}, "adjust", {"F1.flow"})

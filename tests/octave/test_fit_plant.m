@@ -230,6 +230,25 @@
 %! assert (nres >= 1);
 
 %!test
+%! ## a record that starts off steady state fitted as if it started
+%! ## steady (a wrong start, as happens with plant data), two orifices
+%! ## from a factor of 10 off: a result or a vn_fit message, every value
+%! ## inside its allowed range, never another command's error
+%! truth = [1.2e-4; 1.5e-4; 0.1; 0.6];
+%! ex = lab_test (truth, 0.5, 0.05, 7);
+%! ex.start = "steady";
+%! for f = [10 0.1]
+%!   try
+%!     est = vn_fit (lab (truth(1) * f, truth(2) / f, 0.1, 0.6), ex,
+%!                   {"O1.coeff", "O2.coeff"}, "maxiter", 30);
+%!     assert (all (est.value >= 1e-12 & est.value <= 1e6));
+%!     assert (ischar (est.reason) && ! isempty (est.reason));
+%!   catch err
+%!     assert (strncmp (err.message, "vn_fit:", 7), err.message);
+%!   end_try_catch
+%! endfor
+
+%!test
 %! ## the same record from the true values but a rim of 3 m, far above any
 %! ## level the test reached: alone the fit cannot see the rim (no interval,
 %! ## said in est.reason); "starts", 8 spreads starts down to 0.3 m, finds
