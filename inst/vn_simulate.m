@@ -28,8 +28,11 @@
 ## an operating point from @code{vn_steady} (uses its @code{x}), or a state
 ## vector; default: the levels declared on the tanks.
 ## @item @qcode{"reltol"}, @qcode{"abstol"}
-## integrator tolerances (default 1e-6 relative, 1e-8 absolute on volumes
-## in m3).
+## integrator tolerances. Default 1e-6 relative; the absolute tolerance
+## is set per state, scaled to its capacity: a tank's volume gets its largest
+## plan area times 1e-8 m, heat and concentration states that volume figure
+## times 1 K or the largest declared concentration, other states 1e-8.
+## A positive @qcode{"abstol"} replaces them all with one value.
 ## @item @qcode{"solver"}
 ## @qcode{"auto"} (dense up to 100 states, else KLU sparse), @qcode{"dense"}
 ## or @qcode{"klu"}.
