@@ -181,6 +181,10 @@ function opt = parse_options (args)
   for i = 1:numel (names)
     name = lower (names{i});
     val = vals{i};
+    [opt, taken] = integrator_option (opt, "vn_ensemble", lower (name), val);
+    if (taken)
+      continue;
+    endif
     switch (name)
       case "vary"
         if (! (iscell (val) && mod (numel (val), 2) == 0 && ! isempty (val)
@@ -220,25 +224,6 @@ function opt = parse_options (args)
         opt.workers = val;
       case "initial"
         opt.initial = val;
-      case {"reltol", "abstol", "maxstep"}
-        if (! (isscalar (val) && isreal (val) && val > 0 && isfinite (val)))
-          error ("Octave:invalid-input-arg",
-                 "vn_ensemble: option \"%s\" must be a positive number", name);
-        endif
-        opt.(name) = val;
-      case "maxsteps"
-        if (! (isscalar (val) && val >= 1 && val == fix (val)))
-          error ("Octave:invalid-input-arg",
-                 "vn_ensemble: option \"maxsteps\" must be a positive integer");
-        endif
-        opt.maxsteps = val;
-      case "solver"
-        j = find (strcmpi ({"auto", "dense", "klu"}, val));
-        if (! ischar (val) || isempty (j))
-          error ("Octave:invalid-input-arg",
-                 "vn_ensemble: option \"solver\" must be \"auto\", \"dense\" or \"klu\"");
-        endif
-        opt.solver = j - 1;
       case "verbose"
         opt.verbose = logical (val);
       case "cluster"

@@ -271,14 +271,6 @@ function s = yesno (c)
   s = ifelse (c, "yes", "no");
 endfunction
 
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
-
 %!demo
 %! ## Invented scenario: a raw-water tank feeding a clear well.
 %! net = vn_network ("clearwell");

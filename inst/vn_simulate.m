@@ -118,32 +118,15 @@ function opt = parse_options (args)
   for i = 1:numel (names)
     name = names{i};
     val = vals{i};
+    [opt, taken] = integrator_option (opt, "vn_simulate", lower (name), val);
+    if (taken)
+      continue;
+    endif
     switch (lower (name))
       case "dt"
         opt.dt = val;
       case "initial"
         opt.initial = val;
-      case {"reltol", "abstol", "maxstep"}
-        if (! (isscalar (val) && isreal (val) && val > 0 && isfinite (val)))
-          error ("Octave:invalid-input-arg",
-                 "vn_simulate: option \"%s\" must be a positive number",
-                 lower (name));
-        endif
-        opt.(lower (name)) = val;
-      case "maxsteps"
-        if (! (isscalar (val) && val >= 1 && val == fix (val)))
-          error ("Octave:invalid-input-arg",
-                 "vn_simulate: option \"maxsteps\" must be a positive integer");
-        endif
-        opt.maxsteps = val;
-      case "solver"
-        codes = {"auto", "dense", "klu"};
-        j = find (strcmpi (codes, val));
-        if (! ischar (val) || isempty (j))
-          error ("Octave:invalid-input-arg",
-                 "vn_simulate: option \"solver\" must be \"auto\", \"dense\" or \"klu\"");
-        endif
-        opt.solver = j - 1;
       case "verbose"
         opt.verbose = logical (val);
       case "record"

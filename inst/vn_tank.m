@@ -215,14 +215,6 @@ function check_levels (fn, label, par, top)
   endif
 endfunction
 
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
-
 %!test
 %! net = vn_tank (vn_network ("w"), "T1", "area", 2.0, "rim", 3.0, "level", 1.2);
 %! u = net.units(1);

@@ -11,7 +11,7 @@ function s = build_value_str (v)
     s = ["\"" v "\""];
   elseif ((isnumeric (v) || islogical (v)) && isscalar (v))
     if (islogical (v))
-      s = ifelse_str (v, "true", "false");
+      s = ifelse (v, "true", "false");
     elseif (iscomplex (v))
       s = num2str (v);
     else
@@ -22,13 +22,5 @@ function s = build_value_str (v)
   else
     dims = sprintf ("%dx", size (v));
     s = sprintf ("a %s %s", dims(1:end-1), class (v));
-  endif
-endfunction
-
-function s = ifelse_str (c, a, b)
-  if (c)
-    s = a;
-  else
-    s = b;
   endif
 endfunction

@@ -185,11 +185,3 @@ function p = unit_param (p, net, s, name, ex)
     p.shi = ifelse (v > 0, 2 * v, v + w);
   endif
 endfunction
-
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
