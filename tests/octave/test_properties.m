@@ -726,14 +726,25 @@
 %! assert (numel (fails), 0);
 
 ## Central differences of the right-hand side and of outputs YOUT over
-## the states, steps REL times each state's size.
-%!function [Afd, Cfd, hs] = fd_state (pk, x, yout, rel)
+## the states, steps REL times each state's own size.  (The step was
+## once floored at 1e-3 of the largest state of any kind: a heat content
+## of 3e3 m3 degC gave a sight-tube sphere holding 4.5e-5 m3 steps of
+## 3e-6 and 3e-4 m3, the larger one through empty, and P5 reported the
+## exact A(T3.heat, T2.volume) = -q E/V^2 as wrong, seed 400047.  Test
+## design, not the product: with steps on the state's own scale the
+## analytic column agrees to 1e-8.)  A zero state (a species absent, a
+## valve shut) takes a floor of 1e-9 of the largest state of its own
+## kind (volume, heat, species, position), so its step stays in units
+## that belong to it.
+%!function [Afd, Cfd, hs] = fd_state (pk, x, yout, rel, names)
 %!  nx = numel (x);
 %!  Afd = zeros (nx);
 %!  Cfd = zeros (numel (yout), nx);
 %!  hs = zeros (1, nx);
+%!  kind = cellfun (@(s) s(find (s == ".", 1) + 1:end), names(:).', "uniformoutput", false);
 %!  for j = 1:nx
-%!    h = rel * max (abs (x(j)), 1e-3 * max (abs (x)) + 1e-12);
+%!    same = strcmp (kind, kind{j});
+%!    h = rel * max (abs (x(j)), 1e-9 * max (abs (x(same))) + 1e-300);
 %!    hs(j) = h;
 %!    e = zeros (nx, 1);
 %!    e(j) = h;
@@ -814,8 +825,8 @@
 %!     ## differences at two step sizes: an entry passes if it matches
 %!     ## either (the small step can drown in rounding, the large one in
 %!     ## curvature)
-%!     [Afd, Cfd, hx] = fd_state (pk, x, yout, 1e-6);
-%!     [Afd2, Cfd2, hx2] = fd_state (pk, x, yout, 1e-4);
+%!     [Afd, Cfd, hx] = fd_state (pk, x, yout, 1e-6, names);
+%!     [Afd2, Cfd2, hx2] = fd_state (pk, x, yout, 1e-4, names);
 %!     [Bfd, Dfd, hu] = fd_input (pk, x, pin, pv, c, yout, 1e-6);
 %!     [Bfd2, Dfd2, hu2] = fd_input (pk, x, pin, pv, c, yout, 1e-4);
 %!     nx = numel (x);
@@ -998,3 +1009,25 @@
 %! ## well mixed tank, inflow at 12 degC: d(VT)/dt = F (12 - T) (mass and
 %! ## energy balance); the temperature falls toward 12 and stays above it
 %! assert (all (diff (res.T1.temperature) < 0) && res.T1.temperature(end) > 12);
+
+%!test
+%! ## P3 seed 200033: a PI loop holding the level of a sight-tube cone
+%! ## (volume 2.5e-7 m3) by its feed.  Integral action makes the steady
+%! ## level equal the setpoint whatever the disturbance: setpoint gain
+%! ## exactly 1, draw-off and downstream gains 0 (Seborg, Edgar and
+%! ## Mellichamp, Process Dynamics and Control, PI offset-free (memory)).
+%! ## The linear model's entries span 1e-10 .. 2e5, which once read as a
+%! ## singular A: gains 1.037 and -0.0176.
+%! net = vn_network ("sighttube");
+%! net = vn_tank (net, "T1", "shape", "cone", "diameter", 0.00446283, ...
+%!                "height", 0.277944, "level", 0.179408);
+%! net = vn_pump (net, "L1", "T1", "", "flow", 1.81026e-09);
+%! net = vn_feed (net, "F1", "T1", "flow", 8.39069e-09);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", ...
+%!                      "F1.flow", "setpoint", 0.153783, "gain", 1.06775e-07, ...
+%!                      "reset", 1246.86, "action", "reverse", ...
+%!                      "limits", [0 3.31016e-08]);
+%! op = vn_steady (net);
+%! lin = vn_linearize (net, op, {"LC1.setpoint", "L1.speed"}, {"T1.level"});
+%! assert (lin.gain(1), 1, 1e-9);
+%! assert (abs (lin.gain(2)) < 1e-9);       # m per unit speed
