@@ -51,32 +51,20 @@
 %!  endif
 %!endfunction
 
-## Classes a run leaves out: VN_PROP_SKIP ("none": every class), else the
-## classes of known open defects owned elsewhere (PENDING below), each
-## listed with reproducer seeds; a class comes off the list when its
-## owner's fix lands.
-%!function skip = prop_skip (prop)
+## Classes a run leaves out: none by default; VN_PROP_SKIP names some
+## (comma-separated classes of prop_case: shapes, "small", "drydraw",
+## "controller", ...) to narrow a hunt, "none" is the default.  Every
+## class once skipped here is now checked: dry round vessels and draws a
+## tank cannot meet (level map and liquid gate, doc/methods.md section
+## 7), small vessels (tolerances per state scaled to capacity; the P4
+## and P5 notes below), a PI loop on a sight tube (lin_gain balances A,
+## P3 seed 200033 below).
+%!function skip = prop_skip (~)
 %!  env = getenv ("VN_PROP_SKIP");
-%!  if (strcmp (env, "none"))
+%!  if (isempty (env) || strcmp (env, "none"))
 %!    skip = {};
-%!  elseif (! isempty (env))
-%!    skip = strtrim (strsplit (env, ","));
 %!  else
-%!    ## dry vessels whose area vanishes at the bottom (cone, sphere,
-%!    ## horizontal cylinder) and draws a tank cannot meet: negative
-%!    ## levels, CV_TOO_MUCH_WORK, dV/dlevel floored at 1 % of the largest
-%!    ## area while the level law is not, so a linear model near the
-%!    ## bottom is wrong too (issue 8 item 2; VN_PROP_SKIP=none seeds P1 2
-%!    ## 8 13 18 41 69, P2 100028 100038, P4 300033 with VN_PROP_SKIP=small,
-%!    ## P5 400011 400016 400044);
-%!    ## small vessels below 1e-3 m2: one absolute tolerance for every
-%!    ## state (item 3; P4 300008 300010, P6 500013 500060; gains of a
-%!    ## PI loop, P3 200033)
-%!    dry = {"cone", "sphere", "horizontal", "drydraw"};
-%!    pending = struct ("P1", {[dry, {"small"}]}, "P2", {[dry, {"small"}]},
-%!                      "P3", {{"small"}}, "P4", {[dry(1:3), {"small"}]},
-%!                      "P5", {[dry, {"small"}]}, "P6", {{"small"}});
-%!    skip = pending.(prop);
+%!    skip = strtrim (strsplit (env, ","));
 %!  endif
 %!endfunction
 
@@ -702,8 +690,24 @@
 %!   in = pick (c.inputs);
 %!   u0 = input_value (c, op, in);
 %!   du = input_step (c, in, u0, 1e-3);
+%!   ## The nonlinear response is a difference of two runs' contents, so
+%!   ## its error is the integrator's tolerance, and a 0.1 % step on a
+%!   ## sight tube moves a level by 1e-7 .. 1e-5 m.  Two causes, found on
+%!   ## seeds 300007 300010 300021 300033 300039:
+%!   ## - product: vn_stepresponse held every state to one absolute
+%!   ##   tolerance of 1e-10 (a 1e-7 m3 tank's heat content to 5e-5 of
+%!   ##   itself: T1.temperature off by 0.00104 on a response of 0.000856;
+%!   ##   with tight tolerances the linearisation agrees to 0.3 %); it now
+%!   ##   uses the capacity-scaled tolerance per state (fixed 11 of 12);
+%!   ## - test design: that tolerance is 1e-8 m over a vessel's largest
+%!   ##   plan area, so in a cone at a tenth of its height it is 1e-6 m of
+%!   ##   level, 2 % of a 0.1 % step's response (300033).  The step must
+%!   ##   stand well above the tolerance used, so the test asks for one
+%!   ##   1e-4 of that (1e-12 m over the case's area scale) and reltol
+%!   ##   1e-10.
+%!   p4tol = {"reltol", 1e-10, "abstol", 1e-12 * c.A};
 %!   try
-%!     sr = vn_stepresponse (c.net, op, in, du, c.outputs);
+%!     sr = vn_stepresponse (c.net, op, in, du, c.outputs, p4tol{:});
 %!   catch err
 %!     fails = add_fail (fails, c, "P4 stepresponse", err.message);
 %!     continue;
