@@ -306,3 +306,309 @@
 %! r1 = vn_simulate (net, [0 600]);
 %! r2 = vn_simulate (net, [0 600], "abstol", 1e-3);
 %! assert (r1.stats.steps != r2.stats.steps);
+
+%!test
+%! ## The filler feed alone, hopper -> orifice -> sphere -> LV2 under LC2,
+%! ## against Octave's ode15s on the equations written out here: levels
+%! ## as states with A dh/dt = in - out, cone A = pi (R h / H)^2, sphere
+%! ## A = pi h (D - h) (vessel geometry; memory), the orifice dropping in
+%! ## above the sphere's surface (head to its inlet elevation), the valve
+%! ## Q = Kv x / 3600 sqrt(rho0 g h / 1e5) (IEC 60534-2-1, rho0 999.1 as
+%! ## documented), ideal PI x = bias + Kc (e + int e / Ti), e = y - sp
+%! ## (direct action).  A 20 % feed step from the operating point.
+%! n = vn_network ("invented filler feed");
+%! n = vn_tank (n, "HP1", "shape", "cone", "diameter", 1.6, "height", 2.0, "base", 2, "level", 1.2);
+%! n = vn_tank (n, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%! n = vn_feed (n, "F1", "HP1", "flow", 0.010);
+%! n = vn_orifice (n, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%! n = vn_valve (n, "LV2", "SB1", "", "kv", 300, "opening", 0.4);
+%! n = vn_controller (n, "LC2", "measure", "SB1.level", "manipulate", "LV2.opening", ...
+%!                    "setpoint", 0.9, "gain", 2, "reset", 300, "action", "direct", "limits", [0 1]);
+%! op = vn_steady (n);
+%! tt = [0 30 60 120 240 480 900 1500];
+%! res = vn_simulate (n, tt, vn_signal ("F1.flow", "step", 0, 0.010, 0.012), "initial", op, "reltol", 1e-9);
+%! Kc = 2;  Ti = 300;  bias = 0.4;  sp = 0.9;
+%! kval = 300 / 3600 * sqrt (999.1 * g / 1e5);
+%! x = @(z) bias + Kc * (z(2) - sp) + z(3);
+%! f = @(t, z) [(0.012 - 0.008 * sqrt (z(1) + 2 - 1.7)) / (pi * (0.8 * z(1) / 2)^2);
+%!              (0.008 * sqrt (z(1) + 2 - 1.7) - kval * x (z) * sqrt (z(2))) / (pi * z(2) * (1.8 - z(2)));
+%!              Kc / Ti * (z(2) - sp)];
+%! z0 = [op.HP1.level; op.SB1.level; op.LV2.opening - bias];
+%! [~, Z] = ode15s (f, tt, z0, odeset ("RelTol", 1e-10, "AbsTol", 1e-12));
+%! assert (res.HP1.level, Z(:,1), 1e-6);
+%! assert (res.SB1.level, Z(:,2), 1e-6);
+%! assert (res.LV2.opening, bias + Kc * (Z(:,2) - sp) + Z(:,3), 1e-6);
+%! ## and the operating point itself: HP1 passes the feed through O1
+%! assert (op.HP1.level, (0.010 / 0.008)^2 - 0.3, 1e-9);
+
+## ---------------------------------------------------------------- item 4
+
+%!test
+%! ## A bump test with no dead time: the pasteuriser balance tank on a
+%! ## linear outlet (A 2 m2, r 500 s/m2: K = r = 500 m/(m3/s), tau = A r
+%! ## = 1000 s, exact first order).  The fit reports a dead time of exactly
+%! ## 0; SIMC then refuses without "tauc" and asks for it; with tauc it
+%! ## gives Kc = tau / (K tauc), Ti = min (tau, 4 tauc) (Skogestad 2003).
+%! n = vn_network ("invented pasteuriser balance tank");
+%! n = vn_tank (n, "PB1", "area", 2, "level", 2.5);
+%! n = vn_feed (n, "F1", "PB1", "flow", 0.005);
+%! n = vn_resistance (n, "R1", "PB1", "", "r", 500);
+%! for tstep = [200 450]
+%!   res = vn_simulate (n, 0:10:6000, vn_signal ("F1.flow", "step", tstep, 0.005, 0.006), "reltol", 1e-9);
+%!   m = vn_fopdt (res.t, res.F1.flow, res.PB1.level);
+%!   assert (m.deadtime, 0);
+%!   assert ([m.gain m.tau], [500 1000], 1e-4 * [500 1000]);
+%!   assert (all (isfinite ([m.gain m.tau])));
+%!   try
+%!     vn_tune (m, "simc");
+%!     error ("no refusal");
+%!   catch err
+%!     assert (regexp (err.message, "^vn_tune: .*\"tauc\"", "once"));
+%!   end_try_catch
+%!   p = vn_tune (m, "simc", "tauc", 250);
+%!   assert ([p.Kc p.Ti], [m.tau / (m.gain * 250), min(m.tau, 1000)], 1e-12);
+%!   assert (isfinite (p.Kc) && p.Ti > 1);
+%! endfor
+
+%!test
+%! ## The same for an integrating test: the CIP tank on a fixed-flow pump
+%! ## (k' = 1 / A = 0.5 m/s per m3/s, no dead time); SIMC integrating:
+%! ## Kc = 1 / (k' tauc), Ti = 4 tauc (Skogestad 2003)
+%! k = vn_network ("invented CIP tank");
+%! k = vn_tank (k, "KT1", "area", 2, "level", 1);
+%! k = vn_feed (k, "F5", "KT1", "flow", 0.002);
+%! k = vn_pump (k, "P5", "KT1", "", "flow", 0.002);
+%! res = vn_simulate (k, 0:5:1500, vn_signal ("F5.flow", "step", 300, 0.002, 0.0025));
+%! m = vn_fopdt (res.t, res.F5.flow, res.KT1.level, "integrating");
+%! assert (m.deadtime, 0);
+%! assert (m.gain, 0.5, 1e-4);
+%! try
+%!   vn_tune (m, "simc");
+%!   error ("no refusal");
+%! catch err
+%!   assert (regexp (err.message, "^vn_tune: .*\"tauc\"", "once"));
+%! end_try_catch
+%! p = vn_tune (m, "simc", "tauc", 120);
+%! assert ([p.Kc p.Ti], [1 / (m.gain * 120), 480], 1e-9);
+
+## ---------------------------------------------------------------- item 5
+
+%!test
+%! ## Names that collide with result fields are refused at declaration,
+%! ## by every builder, with the reserved names listed
+%! net = juice_line (false);
+%! calls = {@(nm) vn_tank (net, nm, "area", 1), ...
+%!          @(nm) vn_feed (net, nm, "RT1", "flow", 0.001), ...
+%!          @(nm) vn_orifice (net, nm, "CT1", "", "coeff", 0.001), ...
+%!          @(nm) vn_valve (net, nm, "CT1", "", "kv", 5), ...
+%!          @(nm) vn_pump (net, nm, "CT1", "RT1", "flow", 0.001), ...
+%!          @(nm) vn_controller (net, nm, "measure", "BT1.level", "manipulate", "FV1.opening", "setpoint", 1, "gain", 1)};
+%! for nm = {"t", "x", "y", "stats", "states", "events", "units"}
+%!   for c = 1:numel (calls)
+%!     try
+%!       calls{c} (nm{1});
+%!       error ("no refusal for %s", nm{1});
+%!     catch err
+%!       assert (err.identifier, "Octave:invalid-input-arg");
+%!       assert (regexp (err.message, ["^vn_\\w+: \\w+ \"" nm{1} "\".*reserved.*stats"], "once"));
+%!     end_try_catch
+%!   endfor
+%! endfor
+%! ## a harmless name still works and its results stay intact
+%! n2 = vn_tank (net, "tank9", "area", 1);
+%! res = vn_simulate (n2, [0 10]);
+%! assert (isnumeric (res.t) && iscolumn (res.t));
+
+## ---------------------------------------------------------------- item 6
+
+%!test
+%! ## res.stats totals the whole run: twenty days of a daily feed schedule
+%! ## (breakpoints at each midnight) against the same run done as twenty
+%! ## one-day runs, each from where the last ended
+%! net = juice_line (true);
+%! op = vn_steady (net);
+%! days = 20;
+%! day = (0:days)';
+%! feed = 0.010 + 0.001 * mod (day, 2);
+%! tab = [day * 86400, feed];
+%! u = vn_signal ("F1.flow", "table", tab);
+%! r = vn_simulate (net, [0 days * 86400], u, "initial", op, "dt", 3600);
+%! steps = 0;  x = op.x;
+%! for d = 1:days
+%!   rd = vn_simulate (net, [d-1, d] * 86400, u, "initial", x, "dt", 3600);
+%!   steps += rd.stats.steps;
+%!   x = rd.x(end,:).';
+%! endfor
+%! assert (r.stats.restarts, days - 1);         # each interior midnight
+%! assert (r.stats.t_reached, days * 86400);
+%! assert (r.stats.steps >= 0.5 * steps && r.stats.steps <= 2 * steps, ...
+%!         sprintf ("one run %d steps, day by day %d", r.stats.steps, steps));
+%! r2 = vn_simulate (net, [0 2 * 86400], u, "initial", op, "dt", 3600);
+%! assert (r.stats.steps > 4 * r2.stats.steps);
+%! assert (r.stats.rhs >= r.stats.steps);
+
+## ---------------------------------------------------------------- item 8
+
+%!test
+%! ## A level switch on the catch tank starts the return pump P3 (fixed
+%! ## flow, back to RT1).  Frozen (CT1 empty, the pump off) the operating
+%! ## point linearises with the switch holding its output, and the gains
+%! ## equal the differences of two frozen operating points.
+%! net = juice_line (true);
+%! net = vn_pump (net, "P3", "CT1", "RT1", "flow", 0.004, "speed", 0);
+%! net = vn_switch (net, "LS1", "measure", "CT1.level", "manipulate", "P3.speed", "on", 1.0, "off", 0.2);
+%! op = vn_steady (net, "freeze", true);
+%! assert (op.frozen, {"LS1"});
+%! assert (op.P3.flow, 0);
+%! ins = {"F1.flow", "FV1.opening"};
+%! outs = {"RT1.level", "BT1.level", "CT1.level", "LC1.output", "LC2.output", "P3.flow"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs, "freeze", true));
+%! ## the held switch adds no state and keeps P3 off in the model
+%! assert (lin.gain(end,:), [0 0]);
+%! assert (! any (strncmp (lin.states, "LS1", 3)));
+%! ## and the frozen point is a rest point of the full network
+%! res = vn_simulate (net, [0 600], "initial", op);
+%! assert (res.BT1.level, op.BT1.level * ones (size (res.t)), 1e-8);
+%! assert (isempty (res.events.t));
+
+## ---------------------------------------------------------------- item 9
+
+%!test
+%! ## A valve at a bound linearises with the one-sided derivative from
+%! ## inside: the juice line's filler valve LV2 is shut (opening 0) and a
+%! ## drain orifice takes the flow.  B's column is -Kv f'(0) / 3600
+%! ## sqrt(rho0 g h / 1e5) (IEC 60534-2-1; linear f' = 1, equal
+%! ## percentage run linearly to 0 below 0.02 as documented, so f' =
+%! ## R^-0.98 / 0.02), and the gain is the forward difference of two
+%! ## operating points (opening 0 and 1e-7).
+%! for ch = {"linear", "equal"}
+%!   n = vn_network ("invented filler buffer, valve shut");
+%!   n = vn_tank (n, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%!   n = vn_feed (n, "F1", "SB1", "flow", 0.004);
+%!   n = vn_orifice (n, "O9", "SB1", "", "coeff", 0.004 / sqrt (0.8));
+%!   n = vn_valve (n, "LV2", "SB1", "", "kv", 30, "opening", 0, "characteristic", ch{1});
+%!   op = vn_steady (n, "tol", 1e-14);
+%!   assert (op.SB1.level, 0.8, 1e-9);
+%!   lin = vn_linearize (n, op, {"LV2.opening"}, {"SB1.level", "LV2.flow"});
+%!   fp = 1;
+%!   if (strcmp (ch{1}, "equal"))
+%!     fp = 50^-0.98 / 0.02;
+%!   endif
+%!   dq = 30 * fp / 3600 * sqrt (999.1 * g * 0.8 / 1e5);
+%!   assert (lin.B, -dq, 1e-9 * dq);
+%!   assert (lin.D(2), dq, 1e-9 * dq);
+%!   h = 1e-7;
+%!   o1 = vn_steady (n, "LV2.opening", h, "initial", op, "tol", 1e-14);
+%!   G = [(o1.SB1.level - op.SB1.level), (o1.LV2.flow - op.LV2.flow)].' / h;
+%!   assert (lin.gain, G, 1e-5 * abs (G));
+%!   assert (! isempty (strfind (lin.note, "LV2.opening")));
+%! endfor
+
+## --------------------------------------------------------------- item 10
+
+%!test
+%! ## "has no outlet" names the tank that fills: the line built without
+%! ## its filler valve fills the sphere, not the tank the feed enters
+%! n = vn_network ("invented juice line, no filler valve");
+%! n = vn_tank (n, "RT1", "shape", "horizontal", "diameter", 2.4, "length", 6, "level", 1.2);
+%! n = vn_tank (n, "HP1", "shape", "cone", "diameter", 1.6, "height", 2.0, "base", 2, "rim", Inf, "level", 1.2);
+%! n = vn_tank (n, "SB1", "area", 2, "level", 0.9);
+%! n = vn_feed (n, "F1", "RT1", "flow", 0.010);
+%! n = vn_pump (n, "P1", "RT1", "HP1", "shutoff", 22, "k", 3e4);
+%! n = vn_orifice (n, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%! try
+%!   vn_steady (n);
+%!   error ("no refusal");
+%! catch err
+%!   assert (err.identifier, "vesselnet:no-steady-state");
+%!   assert (regexp (err.message, '^vn_steady: tank "SB1" has no outlet', "once"));
+%! end_try_catch
+
+%!test
+%! ## "allowed:" lists name real options, no internal placeholders, and
+%! ## the species of the network where it has some
+%! net = juice_line (false);
+%! ns = vn_network ("invented juice line with sugar", "species", {"brix"});
+%! ns = vn_tank (ns, "RT1", "area", 2);
+%! cases = {@() vn_tank (net, "T9", "colour", 1), "shape, area", "", ...
+%!          @() vn_feed (net, "F9", "RT1", "colour", 1), "flow", "", ...
+%!          @() vn_tank (ns, "T9", "colour", 1), "shape, area", "brix", ...
+%!          @() vn_feed (ns, "F9", "RT1", "colour", 1), "flow", "brix", ...
+%!          @() vn_simulate (net, [0 1], [], "colour", 1), "dt", "", ...
+%!          @() vn_linearize (net, [], "F1.flow", "RT1.level", "colour", 1), "loop", ""};
+%! for c = 1:3:numel (cases)
+%!   try
+%!     cases{c} ();
+%!     error ("no refusal");
+%!   catch err
+%!     assert (regexp (err.message, '^vn_\w+: .*"colour".*allowed: \w', "once"), 1);
+%!     lst = err.message(strfind (err.message, "allowed:"):end);
+%!     assert (! isempty (strfind (lst, cases{c+1})));
+%!     assert (isempty (regexp (lst, '\<(c[1-8]|species[1-8])\>', "once")), lst);
+%!     if (! isempty (cases{c+2}))
+%!       assert (! isempty (strfind (lst, cases{c+2})), lst);
+%!     endif
+%!   end_try_catch
+%! endfor
+
+%!test
+%! ## a missed target names its quantity; a step that leaves the input's
+%! ## range is refused by vn_stepresponse under its own name
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! try
+%!   vn_steady (net, "target", {"HP1.level", 1.99}, "adjust", {"FV1.opening"});
+%!   error ("no refusal");
+%! catch err
+%!   assert (err.identifier, "vesselnet:no-steady-state");
+%!   assert (regexp (err.message, '^vn_steady: .*HP1\.level', "once"), 1);
+%! end_try_catch
+%! for c = {{"FV1.opening", 0.7}, {"P1.speed", -0.8}}
+%!   try
+%!     vn_stepresponse (net, op, c{1}{:}, {"BT1.level"});
+%!     error ("no refusal");
+%!   catch err
+%!     assert (err.identifier, "Octave:invalid-input-arg");
+%!     assert (regexp (err.message, ['^vn_stepresponse: .*' strrep(c{1}{1}, "FV1.", "") '.*outside'], "once"), 1);
+%!   end_try_catch
+%! endfor
+
+%!test
+%! ## ranges refused at declaration, by the command that declares them,
+%! ## naming the unit, the field and the value
+%! net = juice_line (false);
+%! bad = {@() vn_network ("x", "smooth", -1), "vn_network", "SMOOTH", "-1";
+%!        @() vn_network ("x", "smooth", 0.5), "vn_network", "SMOOTH", "0.5";
+%!        @() vn_tank (net, "T9", "area", -2), "vn_tank", "AREA", "-2";
+%!        @() vn_tank (net, "T9", "area", 2, "level", 2e5), "vn_tank", "LEVEL", "200000";
+%!        @() vn_resistance (net, "R9", "CT1", "", "r", 0), "vn_resistance", "R", "0";
+%!        @() vn_controller (net, "XC1", "measure", "BT1.level", "manipulate", "FV1.opening", "setpoint", 1, "gain", 1, "reset", -5), "vn_controller", "RESET", "-5";
+%!        @() vn_switch (net, "LS9", "measure", "CT1.level", "manipulate", "FV1.opening", "on", 1, "off", 1), "vn_switch", "ON", "1";
+%!        @() vn_switch (net, "LS9", "measure", "CT1.level", "manipulate", "FV1.opening", "on", 1e13, "off", 1), "vn_switch", "ON", "1e\\+13";
+%!        @() vn_controller (net, "XC1", "measure", "F1.flow", "manipulate", "F1.flow", "setpoint", 0.01, "gain", 1), "vn_controller", "MEASURE", "F1.flow"};
+%! for i = 1:rows (bad)
+%!   try
+%!     bad{i,1} ();
+%!     error ("no refusal for row %d", i);
+%!   catch err
+%!     assert (err.identifier, "Octave:invalid-input-arg");
+%!     assert (regexp (err.message, ['^' bad{i,2} ': \w+ "\w+": .*' bad{i,3} '.*' bad{i,4}], "once"), 1, err.message);
+%!   end_try_catch
+%! endfor
+
+## --------------------------------------------------------------- item 11
+
+%!test
+%! ## vn_show: each controller's action once, limits as [lo hi], gains with
+%! ## their units (output per measured unit: 1/m for an opening on a level)
+%! s = evalc ("vn_show (juice_line (true))");
+%! lines = strsplit (s, "\n");
+%! for name = {"LC1", "LC2"}
+%!   l = lines{find (strncmp (strtrim (lines), [name{1} " "], 4), 1)};
+%!   assert (numel (strfind (l, "action")), 1, l);
+%!   assert (isempty (regexp (l, '\<(lo|hi) ', "once")), l);
+%!   assert (! isempty (regexp (l, 'gain [0-9.]+ 1/m', "once")), l);
+%! endfor
+%! assert (! isempty (regexp (s, 'LC1 .*limits \[0 1\.1\]', "once")));
+%! assert (! isempty (regexp (s, 'LC2 .*limits \[0 1\]', "once")));
