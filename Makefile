@@ -50,7 +50,7 @@ CTEST_BIN := $(patsubst tests/c/%.c,$(CTEST_DIR)/%,$(CTEST_SRC))
 OCTAVE_ENV = env -u DISPLAY QT_QPA_PLATFORM=offscreen \
              OCTAVE_PATH=$(CURDIR)/inst:$(OCTDIR) VN_ROOT=$(CURDIR) \
              VN_OCTDIR=$(OCTDIR)
-OCTAVE_RUN = $(OCTAVE_ENV) octave-cli --no-gui --norc -q
+OCTAVE_RUN = $(OCTAVE_ENV) octave-cli --no-gui --norc --no-history -q
 OCTAVE_SETUP = more off; warning ('off', 'Octave:gnuplot-graphics'); \
                set (0, 'defaultfigurevisible', 'off');
 
@@ -250,7 +250,7 @@ distcheck: dist
 	@bash tools/check_dist.sh $(TARBALL)
 
 install: dist
-	octave-cli --no-gui --norc -q --eval "pkg install $(TARBALL)"
+	octave-cli --no-gui --norc --no-history -q --eval "pkg install $(TARBALL)"
 
 clean:
 	rm -rf $(BUILD) vesselnet-*.tar.gz

@@ -22,18 +22,27 @@
 ## height (optional).
 ## @item @qcode{"table"}
 ## K x 2 matrix [level (m), volume (m3)], both columns strictly increasing.
+## The last row is the top of the vessel: the level is never extrapolated
+## past the table.  The rim defaults to that top, so a table tank that
+## fills up spills over it (to @qcode{"spill"} or to waste, reported as
+## @code{T.spill}); a level above the rim is only the weir head, over the
+## plan area of the table's last segment.  A @qcode{"rim"} above the top,
+## a @qcode{"rim"} of Inf, and an initial level or volume above the top
+## are refused.
 ## @item @qcode{"base"}
 ## Elevation of the tank bottom, m (default 0).
 ## @item @qcode{"rim"}
 ## Level of the spill weir above the base, m.  Default: the top of a
-## horizontal cylinder, sphere or cone, or the @qcode{"height"} of a prism
-## that has one; otherwise Inf (no spill).
+## horizontal cylinder, sphere, cone or strapping table, or the
+## @qcode{"height"} of a prism that has one; otherwise (an open prism) Inf,
+## no spill.  It may not lie above the top of a closed vessel.
 ## @item @qcode{"crest"}, @qcode{"contractions"}
 ## Weir crest length, m (default the perimeter) and its end contractions
 ## (0, 1 or 2) in the Francis formula Q = 1.84 (L - 0.1 n H) H^1.5.
 ## @item @qcode{"spill"}
 ## Name of a declared tank that receives the spill; @qcode{""} (default)
-## sends it to waste.
+## sends it to waste.  Allowed whenever the rim is finite, given or by
+## default.
 ## @item @qcode{"level"}, @qcode{"volume"}
 ## Initial level, m, or initial volume, m3 (one of the two; default level 0).
 ## @item @qcode{"temperature"}, @qcode{"ua"}
@@ -109,7 +118,7 @@ function u = tank_unit (fn, net, name, ~, args, spec)
     table = double (given.table);
   endif
   top = check_geometry (fn, label, aux.shape, par, table);
-  check_levels (fn, label, par, top);
+  check_levels (fn, label, par, top, table);
 
   to = "";
   if (isfield (given, "spill"))
@@ -118,8 +127,10 @@ function u = tank_unit (fn, net, name, ~, args, spec)
       if (strcmp (to, name))
         build_error (fn, label, "SPILL names the tank itself; give another tank or \"\" for waste");
       endif
-      if (! isfield (par, "rim") || isinf (par.rim))
-        build_error (fn, label, "SPILL \"%s\" given but the tank has no finite RIM to spill over", to);
+      if (isinf (rim_level (aux.shape, par, top)))
+        build_error (fn, label, ["SPILL \"%s\" given but the tank has no ", ...
+                                 "finite RIM to spill over; give RIM (m), or ", ...
+                                 "HEIGHT for a prism"], to);
       endif
       build_check_ref (fn, label, net, "SPILL", to, {"tank"});
     endif
@@ -193,13 +204,41 @@ function top = check_geometry (fn, label, shape, par, table)
   endswitch
 endfunction
 
+## The rim the tank spills over: given, else the top of a closed vessel
+## (a strapping table's last level, a prism's HEIGHT); Inf for none.
+function rim = rim_level (shape, par, top)
+  if (isfield (par, "rim"))
+    rim = par.rim;
+  elseif (strcmp (shape, "prism"))
+    rim = Inf;
+    if (isfield (par, "height"))
+      rim = par.height;
+    endif
+  else
+    rim = top;
+  endif
+endfunction
+
 ## The initial level and the rim must lie inside a closed vessel, and the
-## tank may not start above its own rim.
-function check_levels (fn, label, par, top)
+## tank may not start above its own rim.  A strapping table has a top, its
+## last row: a rim of Inf and an initial volume above it are refused too.
+function check_levels (fn, label, par, top, table)
   if (isfield (par, "level") && isfield (par, "volume"))
     build_error (fn, label, ["give LEVEL (%s m) or VOLUME (%s m3) as the ", ...
                              "initial content, not both"],
                  build_value_str (par.level), build_value_str (par.volume));
+  endif
+  if (! isempty (table))
+    if (isfield (par, "rim") && isinf (par.rim))
+      build_error (fn, label, ["RIM must lie in (0, %s] (m), the top of the ", ...
+                               "strapping table: a table tank spills over its ", ...
+                               "top, got Inf"], build_value_str (top));
+    endif
+    if (isfield (par, "volume") && par.volume > table(end,2))
+      build_error (fn, label, ["VOLUME must not exceed the top of the ", ...
+                               "strapping table (%s m3), got %s"],
+                   build_value_str (table(end,2)), build_value_str (par.volume));
+    endif
   endif
   f = {"rim", "level"};
   for i = 1:2
@@ -262,6 +301,21 @@ endfunction
 %! assert (isfield (u.par, "spill"), false);
 
 %!test
+%! ## Spill is allowed whenever the rim is finite, given or by default:
+%! ## the top of a sphere, cone, lying cylinder or strapping table, the
+%! ## height of a prism.
+%! net = vn_tank (vn_network (), "C", "area", 1);
+%! net = vn_tank (net, "S", "shape", "sphere", "diameter", 2, "spill", "C");
+%! net = vn_tank (net, "K", "shape", "cone", "diameter", 2, "height", 3, "spill", "C");
+%! net = vn_tank (net, "H", "shape", "horizontal", "diameter", 2, "length", 4, "spill", "C");
+%! net = vn_tank (net, "P", "area", 1, "height", 3, "spill", "C");
+%! net = vn_tank (net, "TT", "table", [0 0; 1 2; 2 5], "spill", "C", "volume", 5);
+%! assert ({net.units(2:end).to}, {"C", "C", "C", "C", "C"});
+%! ## and the core takes them: every one builds and runs
+%! res = vn_simulate (net, [0 1]);
+%! assert (res.TT.level(1), 2);
+
+%!test
 %! net = vn_network ("w", "thermal", true, "species", {"chlorine"});
 %! net = vn_tank (net, "T1", "area", 4, "level", 2, "temperature", 12, ...
 %!                "chlorine", 1.2, "ua", 60);
@@ -309,6 +363,11 @@ endfunction
 %!error <vn_tank: tank "T1": SPILL names unit "T9", which network "network" does not hold> vn_tank (vn_network (), "T1", "area", 1, "rim", 2, "spill", "T9")
 %!error <vn_tank: tank "T1": SPILL names the tank itself> vn_tank (vn_network (), "T1", "area", 1, "rim", 2, "spill", "T1")
 %!error <vn_tank: tank "T1": SPILL "T0" given but the tank has no finite RIM> vn_tank (vn_tank (vn_network (), "T0", "area", 1), "T1", "area", 1, "spill", "T0")
+%!error <vn_tank: tank "TT": RIM must lie in \(0, 2\] \(m\), the top of the strapping table: a table tank spills over its top, got Inf> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "rim", Inf)
+%!error <vn_tank: tank "TT": RIM must not exceed the top of the vessel \(2 m\), got 2.5> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "rim", 2.5)
+%!error <vn_tank: tank "TT": LEVEL must not exceed the top of the vessel \(2 m\), got 2.1> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "level", 2.1)
+%!error <vn_tank: tank "TT": VOLUME must not exceed the top of the strapping table \(5 m3\), got 5.5> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "volume", 5.5)
+%!error <vn_tank: tank "T1": SPILL "T0" given but the tank has no finite RIM> vn_tank (vn_tank (vn_network (), "T0", "area", 1), "T1", "area", 1, "height", 3, "rim", Inf, "spill", "T0")
 %!error <vn_tank: tank "T1": SPILL "R" is a boundary; it must be a tank> vn_tank (vn_boundary (vn_network (), "R", "head", 1), "T1", "area", 1, "rim", 2, "spill", "R")
 %!error <vn_tank: tank "T1": TEMPERATURE given \(12\) but network "network" is not thermal> vn_tank (vn_network (), "T1", "area", 1, "temperature", 12)
 %!error <vn_tank: tank "T1": UA given \(60\) but network "network" is not thermal> vn_tank (vn_network (), "T1", "area", 1, "ua", 60)

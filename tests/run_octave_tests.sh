@@ -21,7 +21,7 @@ if [ "${1:-}" = "--one" ]; then
   rc=0
   env -u DISPLAY QT_QPA_PLATFORM=offscreen \
     timeout "${TEST_TIMEOUT:-1800}" \
-    octave-cli --no-gui --norc -q tests/run_octave_tests.m "$resdir" "$file" \
+    octave-cli --no-gui --norc --no-history -q tests/run_octave_tests.m "$resdir" "$file" \
     >"$out" 2>&1 || rc=$?
   grep -E '^  (ok  |FAIL) ' "$out" || true
   if [ ! -s "$resdir/$name.res" ] || [ "$rc" -ne 0 ]; then

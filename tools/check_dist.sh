@@ -23,7 +23,7 @@ mfiles=$(printf '%s\n' "$listing" | sed -n "s,^$top/inst/\([^/]*\)\.m$,\1,p" | t
 octs=$(printf '%s\n' "$listing" | sed -n "s,^$top/src/gateway/\([^/]*\)\.cc$,\1,p" | tr '\n' ' ')
 
 cd "$scratch"
-env -u DISPLAY octave-cli --no-gui --norc -q --eval "
+env -u DISPLAY octave-cli --no-gui --norc --no-history -q --eval "
   pkg prefix '$scratch/pkg' '$scratch/arch';
   pkg local_list '$scratch/octave_packages';
   pkg install -local '$tarball';

@@ -44,12 +44,13 @@ function G = lin_gain (A, B, C, D)
         continue;
       endif
       outs = find (which == k);
-      [x, z] = lin_steady_part (A(s,s), B(s,j));
+      [x, z, t] = lin_steady_part (A(s,s), B(s,j));
       Cs = C(outs,s);
       g = D(outs,j) + Cs * x;
       r = Cs * z;
-      ## a drift the output sees, beyond round-off of the projection
-      seen = abs (r) > 1e-9 * norm (z) * max (abs (Cs), [], 2);
+      ## a drift the output sees, beyond round-off of the projection,
+      ## judged in the balanced states (units of the states drop out)
+      seen = abs (r) > 1e-9 * norm (z ./ t) * max (abs (Cs * diag (t)), [], 2);
       g(seen) = Inf * sign (r(seen));
       G(outs,j) = full (g);
     endfor
@@ -80,6 +81,17 @@ endfunction
 %! G = lin_gain (A, B, C, zeros (3, 1));
 %! assert (G, [1; 1; 0], 1e-12);
 %! assert (lastwarn (), "");
+
+%!test
+%! ## A PI loop on a sight tube (see lin_steady_part): setpoint gain
+%! ## exactly 1 and feed gain 0 for the controlled level (integral
+%! ## action, analytic); unbalanced they came out 1.04 and 1e7.
+%! a = 5e-6;  c = 1e-10;  Kc = 1e-7;  Ti = 1200;
+%! A = [-(c + Kc) / a, Kc / Ti; -1 / a, 0];
+%! G = lin_gain (A, [Kc 1; 1 0], [1/a 0], zeros (1, 2));
+%! assert (G(1), 1, 1e-9);
+%! ## 0 to round-off of the open-loop gain 1/c = 1e10 m per m3/s
+%! assert (abs (G(2)) < 1e-9 / c);
 
 %!test
 %! ## A closed pair of tanks (no outlet): each level integrates upwards

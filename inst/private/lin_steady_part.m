@@ -1,5 +1,5 @@
 ## -*- texinfo -*-
-## @deftypefn {} {[@var{x}, @var{z}] =} lin_steady_part (@var{A}, @var{b})
+## @deftypefn {} {[@var{x}, @var{z}, @var{t}] =} lin_steady_part (@var{A}, @var{b})
 ## Return the steady response of @code{dx/dt = A x + b} for a square
 ## @var{A} that may be singular.
 ##
@@ -14,6 +14,13 @@
 ## about 1e12 times the fastest integrates).  No solve is attempted on a
 ## singular matrix, so no singularity warning is raised.
 ##
+## Every decision and solve is made on the balanced matrix
+## @code{diag (1./t) * A * diag (t)} (@code{lin_balance}, returned as
+## @var{t}), a similarity: the answer does not depend on the units of
+## the states.  Unbalanced, a PI loop on a sight tube (entries from 1e-10
+## to 2e5) looked singular to the threshold below and its setpoint gain
+## came out 1.04 instead of exactly 1.
+##
 ## Singular matrices above 3000 rows are not decomposed: the resolvent at
 ## three small frequencies s gives z and x to O(s^2) instead.  Callers first
 ## remove the states the input cannot reach (@code{lin_reach}), which
@@ -21,7 +28,15 @@
 ## @seealso{lin_gain, lin_reach}
 ## @end deftypefn
 
-function [x, z] = lin_steady_part (A, b)
+function [x, z, t] = lin_steady_part (A, b)
+  t = lin_balance (A);
+  [x, z] = balanced_part (diag (1 ./ t) * A * diag (t), b ./ t);
+  x .*= t;
+  z .*= t;
+endfunction
+
+## The steady part of a balanced system.
+function [x, z] = balanced_part (A, b)
   n = rows (A);
   z = zeros (n, columns (b));
   if (n == 0)
@@ -127,6 +142,19 @@ endfunction
 %! assert (z(n), 1, 1e-6);
 %! assert (norm (z(1:n-1)), 0, 1e-6);
 %! assert (x(1:n-1), ones (n-1, 1), 1e-5);
+
+%!test
+%! ## A PI loop on a sight tube, states [volume (m3); integral (m s)]:
+%! ## area a 5e-6 m2, outflow coefficient c 1e-10 m2/s, gain Kc 1e-7
+%! ## m2/s, reset Ti 1200 s; V' = u - c V/a, u = Kc (sp - V/a) + Kc/Ti I,
+%! ## I' = sp - V/a.  Integral action holds the level at the setpoint:
+%! ## a setpoint step moves the level by exactly as much, a feed step not
+%! ## at all (analytic).  Unbalanced, both looked singular.
+%! a = 5e-6;  c = 1e-10;  Kc = 1e-7;  Ti = 1200;
+%! A = [-(c + Kc) / a, Kc / Ti; -1 / a, 0];
+%! [x, z] = lin_steady_part (A, [Kc 1; 1 0]);
+%! assert (z, zeros (2));
+%! assert (x(1,:) / a, [1 0], 1e-9);
 
 %!test
 %! ## Nonsingular: the plain solve.

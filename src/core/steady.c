@@ -523,6 +523,17 @@ static int check_outlets (vn_net *net)
   return st;
 }
 
+/* Liquid above a nozzle at height z of tank node i as the gates see it:
+ * the equivalent level of vn_tank_above (volume above the nozzle over the
+ * gate area; the level above the nozzle in a prism).  In a round vessel
+ * near its apex the level itself overstates it many times (a cone's 5 cm
+ * is 0.6 mm over its gate area), so a pump starved by its suction gate
+ * must be judged on this, not on the level. */
+static double above (const vn_net *net, int i, double z)
+{
+  return vn_tank_above (net, &net->nd[i], z, -1, NULL, NULL);
+}
+
 /* At an answer: a tank that runs dry under a draw it cannot meet, or a
  * curve pump that cannot reach the head it works against. */
 static int check_answer (ss *S)
@@ -538,10 +549,13 @@ static int check_answer (ss *S)
         {
           double sp = par_named (net, u, "speed", 1);
           double out = par_named (net, u, "outlet", 0);
-          double lev = net->nd[s].level - out;
+          double lev = above (net, s, out);
+          /* the pump's own suction band, as pump.c gates it */
+          double pb = given_named (net, u, "suction")
+                      ? par_named (net, u, "suction", band) : band;
           double want = given_named (net, u, "flow")
                         ? par_named (net, u, "flow", 0) * sp : NAN;
-          if (sp > 0 && lev < 2 * band
+          if (sp > 0 && lev < 2 * pb
               && (isnan (want) || u->q < (1 - 1e-6) * want))
             return vn_fail (net, VN_ENOSTEADY, "tank \"%s\" runs dry: pump "
                             "\"%s\" draws more than flows in even with the "
@@ -616,7 +630,7 @@ static int diagnose (ss *S, int st, double tsim)
                         " (reached by simulation)",
                         S->F[worst], has_rim (u) ? ""
                         : " and it has no rim to spill over");
-      if (net->nd[t].level < 2 * net->smooth)
+      if (above (net, t, 0) < 2 * net->smooth)
         return vn_fail (net, VN_ENOSTEADY, "tank \"%s\" runs dry: its "
                         "outlets take %g m3/s more than flows in even with "
                         "the tank empty; the level would have to be "

@@ -162,6 +162,9 @@ static double level_of (const vn_unit *u, int shape, double V, double *dldV)
           else
             hi = mid;
         }
+      /* past the last row (the top, where the rim is at the latest) the
+       * last segment continues: a level there is the weir head over the
+       * rim, carried by the last row's area */
       double s = (t[2 * hi] - t[2 * lo]) / (t[2 * hi + 1] - t[2 * lo + 1]);
       *dldV = s;
       return t[2 * lo] + s * (V - t[2 * lo + 1]);
@@ -527,8 +530,27 @@ static int check (vn_net *net, vn_unit *u)
         int n = u->ntab;
         d[D_AMAX] = (u->tab[2 * n - 1] - u->tab[2 * n - 3])
                     / (u->tab[2 * n - 2] - u->tab[2 * n - 4]);
-        d[D_HTOP] = INFINITY;
-        d[D_VTOP] = INFINITY;
+        /* the table's last row is the vessel's top: the rim defaults to
+         * it and may not lie above it (Inf included), so the level never
+         * runs up the last segment unbounded; above the rim only the
+         * weir head stands, over the last segment's area */
+        d[D_HTOP] = u->tab[2 * n - 2];
+        d[D_VTOP] = u->tab[2 * n - 1];
+        if (vn_given (net, u, RIM)
+            && !(vn_par (net, u, RIM) <= d[D_HTOP] * (1 + 1e-12)))
+          return vn_fail_unit (net, u, "rim %g m lies above the top of "
+                               "the strapping table (%g m); a table tank "
+                               "spills over its top, so its rim is at "
+                               "most the table's last level",
+                               vn_par (net, u, RIM), d[D_HTOP]);
+        if (vn_par (net, u, LEVEL) > d[D_HTOP])
+          return vn_fail_unit (net, u, "level %g m lies above the top of "
+                               "the strapping table (%g m)",
+                               vn_par (net, u, LEVEL), d[D_HTOP]);
+        if (vn_given (net, u, VOLUME) && vn_par (net, u, VOLUME) > d[D_VTOP])
+          return vn_fail_unit (net, u, "volume %g m3 lies above the top of "
+                               "the strapping table (%g m3)",
+                               vn_par (net, u, VOLUME), d[D_VTOP]);
       }
       break;
     default:

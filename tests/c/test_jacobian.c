@@ -420,6 +420,18 @@ static void spills (void)
     vt_set (&b, t, "rim", 2.5);
   }
   check_net ("strapping table over its rim", &b, NULL);
+
+  vt_init (&b);
+  {
+    /* the rim defaults to the table's top (3 m, 9 m3): 0.2 m3 above it,
+     * over the last segment's 4 m2, is a weir head of 0.05 m */
+    static const double tab[] = {0, 0, 1, 2, 2, 5, 3, 9};
+    static const double xs[] = {9.2, NAN};
+    t = tank (&b, "tb", S_TABLE, 2.9);
+    vt_table (&b, t, tab, 4);
+    b.ref[4 * t] = prism (&b, "catch", 2, 0.5);
+    check_net ("strapping table over its top, default rim", &b, xs);
+  }
 }
 
 /* Valve characteristics, with and without an actuator lag. */

@@ -209,6 +209,32 @@ static void tanks (void)
     vt_table (&b, t, bad, 2);
     refuse ("table with NaN volume", &b, "TB", "table row 2", "finite");
   }
+  {
+    /* a strapping table has a top (its last row): rim, initial level and
+     * volume above it are refused, and so is a rim of Inf */
+    static const double tab[] = {0, 0, 1, 2, 2, 5};
+    static const struct { const char *field; double v; const char *want; }
+    c[] = {{"rim", 2.5, "rim 2.5"}, {"rim", INFINITY, "rim inf"},
+           {"level", 2.1, "level 2.1"}, {"volume", 5.5, "volume 5.5"}};
+    for (int i = 0; i < 4; i++)
+      {
+        vt_init (&b);
+        t = tank_of (&b, "TB", 4);
+        vt_table (&b, t, tab, 3);
+        vt_set (&b, t, c[i].field, c[i].v);
+        refuse (c[i].want, &b, "TB", c[i].want, "top of the strapping table");
+      }
+    /* at the top itself it builds */
+    vt_init (&b);
+    t = tank_of (&b, "TB", 4);
+    vt_table (&b, t, tab, 3);
+    vt_set (&b, t, "rim", 2);
+    vt_set (&b, t, "level", 2);
+    vn_net *ok = NULL;
+    VT_CHECK (vt_build (&b, &ok) == VN_OK, "table tank at its top builds (%s)",
+              b.msg);
+    vn_net_free (ok);
+  }
 
   base (&b);
   vt_set (&b, 0, "volume", 2);

@@ -83,6 +83,10 @@
 %!  'vn_tank (net, "3T", "area", 1)', 'vn_tank', {'tank "3T"', 'NAME', 'must be an identifier'};
 %!  'vn_tank (net, "T3", "area", 1, "level", 1, "volume", 1)', 'vn_tank', {'tank "T3"', 'T3'};
 %!  'vn_tank (net, "T3", "area", 1, "crest", -1, "rim", 2)', 'vn_tank', {'tank "T3"', 'T3', 'must be a positive finite scalar'};
+%!  'vn_tank (net, "T3", "table", [0 0; 1 2; 2 5], "rim", Inf)', 'vn_tank', {'tank "T3"', 'RIM', 'must lie in (0, 2] (m)', 'strapping table', 'got Inf'};
+%!  'vn_tank (net, "T3", "table", [0 0; 1 2; 2 5], "rim", 2.5)', 'vn_tank', {'tank "T3"', 'RIM', 'must not exceed the top of the vessel (2 m)', 'got 2.5'};
+%!  'vn_tank (net, "T3", "table", [0 0; 1 2; 2 5], "level", 2.5)', 'vn_tank', {'tank "T3"', 'LEVEL', 'must not exceed the top of the vessel (2 m)', 'got 2.5'};
+%!  'vn_tank (net, "T3", "table", [0 0; 1 2; 2 5], "volume", 6)', 'vn_tank', {'tank "T3"', 'VOLUME', 'must not exceed the top of the strapping table (5 m3)', 'got 6'};
 %!  'vn_boundary (net, "B1")', 'vn_boundary', {'boundary "B1"', 'B1', 'is required'};
 %!  'vn_boundary (net, "B1", "head", NaN)', 'vn_boundary', {'boundary "B1"', 'B1', 'must be a finite real scalar'};
 %!  'vn_boundary (net, "B1", "head", 2e5)', 'vn_boundary', {'boundary "B1"', 'B1', 'must lie in [-100000, 100000] (m)'};
