@@ -79,9 +79,9 @@
 ## @item @qcode{"initial"}
 ## start from an operating point (its @code{x}) or a state vector.
 ## @item @qcode{"maxiter"}
-## Newton iterations per attempt (default 60).
+## Newton iterations per attempt, a whole number in [1, 10000] (default 60).
 ## @item @qcode{"tol"}
-## scaled residual accepted as converged (default 1e-10).
+## scaled residual accepted as converged, in (0, 1) (default 1e-10).
 ## @item @qcode{"solver"}
 ## @qcode{"auto"} (dense up to 100 unknowns, else KLU), @qcode{"dense"}
 ## or @qcode{"klu"}.
@@ -207,15 +207,19 @@ function [ovr, opt] = parse_args (net, args)
       case "initial"
         opt.initial = val;
       case "maxiter"
-        if (! (isscalar (val) && isreal (val) && val >= 1 && val == fix (val)))
+        if (! (isnumeric (val) && isscalar (val) && isreal (val)
+               && val >= 1 && val <= 1e4 && val == fix (val)))
           error ("Octave:invalid-input-arg",
-                 "vn_steady: option \"maxiter\" must be a positive integer");
+                 "vn_steady: option \"maxiter\" must be a whole number in [1, 10000], got %s",
+                 build_value_str (val));
         endif
         opt.maxiter = val;
       case "tol"
-        if (! (isscalar (val) && isreal (val) && val > 0 && val < 1))
+        if (! (isnumeric (val) && isscalar (val) && isreal (val)
+               && val > 0 && val < 1))
           error ("Octave:invalid-input-arg",
-                 "vn_steady: option \"tol\" must lie in (0, 1)");
+                 "vn_steady: option \"tol\" must lie in (0, 1), got %s",
+                 build_value_str (val));
         endif
         opt.tol = val;
       case "solver"
@@ -455,6 +459,9 @@ endfunction
 %! vn_steady (vn_valve (net, "LV1", "T1", "", "kv", 40), "LV1.opening", 1.5);
 %!error <vn_steady: input "F1.flow": values must lie in \[-1e\+06, 1e\+06\] \(m3/s\), got 3e\+06$> vn_steady (vn_feed (vn_tank (vn_network (), "T1", "area", 2), "F1", "T1"), "F1.flow", 3e6)
 
+%!error <vn_steady: option "maxiter" must be a whole number in \[1, 10000\], got 1e\+06> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "maxiter", 1e6)
+%!error <vn_steady: option "tol" must lie in \(0, 1\), got 2> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "tol", 2)
+%!error <vn_steady: option "tol" must lie in \(0, 1\), got "tight"> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "tol", "tight")
 %!error <2 target\(s\) but 1 adjusted>
 %! net = one_tank (true);
 %! vn_steady (net, "target", {"T1.level", 2, "T1.volume", 4}, "adjust", {"F1.flow"});

@@ -219,8 +219,10 @@
 %!  'vn_steady (net, "target", {"T9.level", 1}, "adjust", {"F1.flow"})', 'vn_steady', {'quantity "T9.level"', 'T9', 'units: T1, T2, F1'};
 %!  'vn_steady (net, "target", {"T2.level", 1}, "adjust", {"T1.level"})', 'vn_steady', {'quantity "T1.level"', 'T1', 'inputs in network "w": F1.flow, LV1.opening'};
 %!  'vn_steady (net, "target", {"T2.level", NaN}, "adjust", {"F1.flow"})', 'vn_steady', {'T2', 'must be a finite real scalar'};
-%!  'vn_steady (net, "maxiter", -1)', 'vn_steady', {'option "maxiter"', 'must be a positive integer'};
-%!  'vn_steady (net, "tol", 0)', 'vn_steady', {'option "tol"', 'must lie in (0, 1)'};
+%!  'vn_steady (net, "maxiter", -1)', 'vn_steady', {'option "maxiter"', 'must be a whole number in [1, 10000]', 'got -1'};
+%!  'vn_steady (net, "maxiter", 1e9)', 'vn_steady', {'option "maxiter"', 'must be a whole number in [1, 10000]', 'got 1e+09'};
+%!  'vn_steady (net, "tol", 0)', 'vn_steady', {'option "tol"', 'must lie in (0, 1)', 'got 0'};
+%!  'vn_steady (net, "LV1.opening", NaN)', 'vn_steady', {'LV1.opening', 'must be a finite real scalar'};
 %!  'vn_steady (net, "freeze", "yes")', 'vn_steady', {'option "freeze"', 'must be true or false'};
 %!  'vn_steady (net, "initial", [1 2 3 4 5])', 'vn_steady', {'start state', 'has 5 values; this network has 2 states'};
 %!  'vn_steady (net, "bogus", 1)', 'vn_steady', {'quantity "UNIT.VARIABLE"', 'option "bogus"', 'allowed: ', 'target', 'adjust', 'initial'};
