@@ -40,9 +40,18 @@
 ## derivative filter as a fraction of Td (default 0.1).
 ## @end table
 ##
-## In a cascade, declare the outer (master) controller before the inner
-## one whose setpoint it drives: the inner controller reads that setpoint
-## within the same evaluation.
+## Cascade: declare the inner (slave) controller first, then the outer
+## (master) one with @qcode{"manipulate"} naming the inner one's
+## @qcode{"setpoint"}.  Within each evaluation the outer controller acts
+## first, so the inner one reads the setpoint it is given at that instant;
+## up to seven levels may be chained, and a chain that comes back to its
+## own setpoint is refused.  A switch may drive a setpoint in the same way.
+##
+## At the start of a run a controller's transmitter filter reads the plant
+## as declared, with every controller output at its bias (by default the
+## driven input's declared value); a network declared at equilibrium
+## stays there, and one declared off its setpoint sees the controller act
+## on the error from the first instant.
 ##
 ## The controller's output is reported as @code{res.NAME.output}, with
 ## @code{res.NAME.measurement} and @code{res.NAME.error}.  Settings must be
@@ -138,3 +147,17 @@ endfunction
 %!error <ANTIWINDUP must be true or false> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "antiwindup", "yes")
 %!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
 %!error <vn_controller: controller "events": NAME "events" is reserved> vn_controller (net, "events", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1)
+
+## A cascade: the outer level loop sets the inner flow loop's setpoint.
+%!test
+%! net = vn_tank (vn_network ("c"), "T1", "area", 2, "level", 1.2);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_pump (net, "P1", "T1", "", "flow", 0.02, "speed", 0.5);
+%! net = vn_controller (net, "FC1", "measure", "P1.flow", "manipulate", "P1.speed", ...
+%!                      "setpoint", 0.01, "gain", 40, "reset", 5, "limits", [0 1.5]);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "FC1.setpoint", ...
+%!                      "setpoint", 1, "gain", 0.02, "reset", 300, "action", "direct");
+%! res = vn_simulate (net, [0 1], "dt", 1);
+%! ## outer output at t = 0: bias 0.01 + 0.02 (1.2 - 1) = 0.014 m3/s
+%! assert (res.LC1.output(1), 0.014, 1e-12);
+%! assert (res.FC1.output(1), 0.5 + 40 * (0.014 - 0.01), 1e-10);

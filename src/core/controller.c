@@ -131,6 +131,13 @@ static double measurement (vn_net *net, vn_unit *u, const double *x,
 
 static void pre (vn_net *net, vn_unit *u, const double *x)
 {
+  if (net->hold_loops)
+    {
+      u->q = u->d[D_BIAS];
+      u->dq.n = 0;
+      net->p[net->u[u->ref[2]].poff + u->ref[3]] = u->q;
+      return;
+    }
   int xi, xf, xz;
   layout (u, &xi, &xf, &xz);
   double s = net->p[u->poff + ACTION] ? 1 : -1;
