@@ -109,15 +109,13 @@ function net = vn_controller (net, name, varargin)
     endif
     ## the output also stays within the driven input's own range (a valve
     ## opening within [0, 1]); limits must leave something of it
-    q = vn_quantity (net, o.manipulate, "input", sprintf ("%s: controller \"%s\"", fn, name));
-    k = vn_schema ().(q.kind);
-    rlo = k.lo(q.slot + 1);
-    rhi = k.hi(q.slot + 1);
+    [rlo, rhi, ru] = loop_input_range (net, o.manipulate,
+                                       sprintf ("%s: controller \"%s\"", fn, name));
     if (! (max (L(1), rlo) < min (L(2), rhi)))
       error ("Octave:invalid-input-arg",
              "%s: controller \"%s\": LIMITS %s leave nothing of the range of %s, [%s %s] (%s)",
              fn, name, mat2str (L(:).', 6), o.manipulate, build_value_str (rlo),
-             build_value_str (rhi), k.units{q.slot + 1});
+             build_value_str (rhi), ru);
     endif
     par.lo = L(1);
     par.hi = L(2);
