@@ -104,10 +104,11 @@ int vn_loop_order (vn_net *net)
       /* derivatives chain through at most 8 driven inputs (lf.c) */
       if (depth[i] > 6)
         {
+          int levels = depth[i] + 1;
           free (depth);
           return vn_fail_unit (net, &net->u[i], "it heads a cascade of %d "
                                "controllers or switches; at most 7 are "
-                               "supported", depth[i] + 1);
+                               "supported", levels);
         }
     }
   /* deepest (outermost) first; declaration order within a depth */

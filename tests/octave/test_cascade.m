@@ -106,3 +106,20 @@
 %! k = net.index.FC1;
 %! net.units(k).aux.manipulate = "LC1.setpoint";
 %! vn_simulate (net, [0 10]);
+
+## Seven levels run; an eighth is refused (derivatives chain through at
+## most eight driven inputs), naming the outermost controller.
+%!test
+%! net = surge_line (0.01);
+%! prev = "LC1";
+%! for k = 3:7
+%!   name = sprintf ("C%d", k);
+%!   net = vn_controller (net, name, "measure", "T1.level", "manipulate", [prev ".setpoint"], ...
+%!                        "setpoint", 1, "gain", 1e-3, "action", "direct");
+%!   prev = name;
+%! endfor
+%! res = vn_simulate (net, [0 10]);
+%! assert (res.T1.level(end), 1, 1e-3);
+%! net = vn_controller (net, "C8", "measure", "T1.level", "manipulate", "C7.setpoint", ...
+%!                      "setpoint", 1, "gain", 1e-3, "action", "direct");
+%! fail ("vn_simulate (net, [0 10])", 'controller "C8": it heads a cascade of 8 controllers or switches; at most 7 are supported');
