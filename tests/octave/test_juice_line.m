@@ -460,6 +460,7 @@
 %!   res = vn_simulate (n, 0:10:6000, vn_signal ("F1.flow", "step", tstep, 0.005, 0.006), "reltol", 1e-9);
 %!   m = vn_fopdt (res.t, res.F1.flow, res.PB1.level);
 %!   assert (m.deadtime, 0);
+%!   assert (m.converged);
 %!   assert ([m.gain m.tau], [500 1000], 1e-4 * [500 1000]);
 %!   assert (all (isfinite ([m.gain m.tau])));
 %!   try
@@ -482,8 +483,12 @@
 %! k = vn_feed (k, "F5", "KT1", "flow", 0.002);
 %! k = vn_pump (k, "P5", "KT1", "", "flow", 0.002);
 %! res = vn_simulate (k, 0:5:1500, vn_signal ("F5.flow", "step", 300, 0.002, 0.0025));
+%! lastwarn ("");
 %! m = vn_fopdt (res.t, res.F5.flow, res.KT1.level, "integrating");
 %! assert (m.deadtime, 0);
+%! ## a dead time of none converges (it once ran out of iterations)
+%! assert (m.converged);
+%! assert (isempty (lastwarn ()));
 %! assert (m.gain, 0.5, 1e-4);
 %! try
 %!   vn_tune (m, "simc");
