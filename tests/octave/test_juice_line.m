@@ -662,6 +662,48 @@
 %!   assert (! isempty (strfind (lin.note, "LV2.opening")));
 %! endfor
 
+%!test
+%! ## A signal that drives the filler valve past its travel (a ramp from
+%! ## 0.4 to 1.5 over 600 s) is clipped in the physics and in res, with a
+%! ## warning naming the signal and the range.  The clipped run equals a
+%! ## run of the signal as the valve follows it: the ramp to 1 where the
+%! ## given ramp crosses 1 (t = 600 * 0.6 / 1.1 s), then 1.
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! tt = (0:30:1800)';
+%! u = vn_signal ("LV2.opening", "table", [0 0.4; 600 1.5; 1800 1.5]);
+%! lastwarn ("");
+%! r1 = vn_simulate (net, tt, u, "initial", op);
+%! [msg, id] = lastwarn ();
+%! assert (id, "vesselnet:clipped");
+%! assert (regexp (msg, '^vn_simulate: .*LV2\.opening.*1\.5.*\[0, 1\]', "once"), 1, msg);
+%! tc = 600 * 0.6 / 1.1;
+%! assert (r1.LV2.opening, min (0.4 + 1.1 * tt / 600, 1), 1e-12);
+%! r2 = vn_simulate (net, tt, vn_signal ("LV2.opening", "table", [0 0.4; tc 1; 1800 1]), "initial", op);
+%! assert (r1.SB1.level, r2.SB1.level, 1e-6);      # two runs, reltol 1e-6
+%! assert (r1.LV2.flow, r2.LV2.flow, 1e-6 * 0.010);
+
+%!test
+%! ## integrator options and signal values out of range are refused by
+%! ## the command called, naming the option and its range
+%! net = juice_line (false);
+%! sim = @(varargin) vn_simulate (net, [0 60], varargin{:});
+%! bad = {@() sim ([], "reltol", 0.5), "vn_simulate", "reltol";
+%!        @() sim ([], "reltol", 1e-14), "vn_simulate", "reltol";
+%!        @() sim ([], "abstol", -1), "vn_simulate", "abstol";
+%!        @() sim ([], "maxstep", 1e-9), "vn_simulate", "maxstep";
+%!        @() sim (vn_signal ("F1.flow", "step", 10, 0.01, 2e6)), "vn_simulate", "F1.flow";
+%!        @() vn_signal ("F1.flow", "step", 10, 0.01, NaN), "vn_signal", "F1.flow"};
+%! for i = 1:rows (bad)
+%!   try
+%!     bad{i,1} ();
+%!     error ("no refusal for row %d", i);
+%!   catch err
+%!     assert (err.identifier, "Octave:invalid-input-arg");
+%!     assert (regexp (err.message, ['^' bad{i,2} ': .*' bad{i,3}], "once"), 1, err.message);
+%!   end_try_catch
+%! endfor
+
 ## --------------------------------------------------------------- item 10
 
 %!test
