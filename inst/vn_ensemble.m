@@ -68,7 +68,7 @@
 ## a start for every run (an operating point from @code{vn_steady} or a
 ## state vector); default: each run from its declared levels.
 ## @item @qcode{"reltol"}, @qcode{"abstol"}, @qcode{"solver"}, @qcode{"maxsteps"}, @qcode{"maxstep"}
-## as for @code{vn_simulate}.
+## as for @code{vn_simulate}, with the same allowed ranges.
 ## @item @qcode{"cluster"}
 ## a launcher command, e.g. @qcode{"mpirun -np 8 --hostfile hosts"} or a
 ## scheduler's own: the runs are spread over MPI ranks by the standalone
@@ -139,6 +139,9 @@ function ens = vn_ensemble (net, tspan, varargin)
   endif
   [names, rec, units] = record_list (net, cn, opt.record);
   sig = vn_pack_signals (net, u, "vn_ensemble", cn);
+  if (! isempty (sig))
+    signal_clip_warn ("vn_ensemble", sig.clips, tout(1), tout(end));
+  endif
   x0 = [];
   if (! isempty (opt.initial))
     if (isstruct (opt.initial) && isfield (opt.initial, "x"))
@@ -582,5 +585,25 @@ endfunction
 %!error <"O1.coeff" has 2 values but another parameter has 3> vn_ensemble (net, [0 10], "vary", {"T2.area", [1 2 3], "O1.coeff", [1 2]})
 %!error <"draws" needs a fit> vn_ensemble (net, [0 10], "draws", 10)
 %!error <no unit "Q1"> vn_ensemble (net, [0 10], "vary", {"Q1.coeff", 1})
+%!test
+%! ## a pump speed signal below 0 is clipped to 0 in every run, with one
+%! ## warning, and the runs match vn_simulate's (invented data)
+%! n = vn_tank (vn_network ("p"), "T1", "area", 2, "level", 1);
+%! n = vn_pump (n, "P1", "T1", "", "flow", 0.001);
+%! n = vn_orifice (n, "O1", "T1", "", "coeff", 0.001);
+%! us = vn_signal ("P1.speed", "step", 50, 1, -1);
+%! warning ("off", "vesselnet:clipped", "local");
+%! ens = vn_ensemble (n, [0 100], us, "vary", {"O1.coeff", [0.001; 0.002]},
+%!                    "dt", 10, "record", {"T1.level"}, "workers", 1);
+%! n.units(3).par.coeff = 0.002;
+%! r = vn_simulate (n, [0 100], us, "dt", 10);
+%! assert (ens.y(:, 1, 2), r.T1.level, 1e-6);
+%! ## after 50 s only the orifice drains: the pump stopped, not reversed
+%! assert (all (diff (ens.y(6:end, 1, 2)) < 0));
+%!warning <vn_ensemble: signal "P1.speed" falls to -1 at t = 50 s, outside its range \[0, 10\]>
+%! n = vn_pump (vn_tank (vn_network ("p"), "T1", "area", 2, "level", 1), "P1", "T1", "", "flow", 0.001);
+%! vn_ensemble (n, [0 100], vn_signal ("P1.speed", "step", 50, 1, -1), "vary", {"T1.area", [2; 3]}, "workers", 1);
+%!error <vn_ensemble: signal "F1.flow": values must lie in \[-1e\+06, 1e\+06\] \(m3/s\), got 2e\+06 at t = 5 s> vn_ensemble (net, [0 10], vn_signal ("F1.flow", "step", 5, 0, 2e6), "vary", {"O1.coeff", [1 2]})
+%!error <vn_ensemble: option "abstol" must lie in \[1e-18, 1000\]> vn_ensemble (net, [0 10], u, "vary", {"O1.coeff", [1 2]}, "abstol", 1e9)
 %!error <option "workers"> vn_ensemble (net, [0 10], "vary", {"O1.coeff", 1}, "workers", 0)
 %!error <unknown option "runs"> vn_ensemble (net, [0 10], "runs", 3)

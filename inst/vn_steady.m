@@ -8,7 +8,12 @@
 ## With no further arguments the inputs keep their declared values (feed
 ## flows, valve openings, pump speeds, boundary heads).  Pairs
 ## @var{quantity}, @var{value} such as @code{"F1.flow", 0.025} set inputs
-## to other values first.
+## to other values first.  A value outside the input's range is an error
+## (a feed flow beyond 1e6 m3/s, a negative concentration), except for a
+## position past its travel (a valve opening outside [0, 1], a pump speed
+## outside [0, 10]): that is clipped to the range, with a warning
+## (@qcode{"vesselnet:clipped"}), and the operating point holds the
+## clipped value.
 ##
 ## The inverse problem: @qcode{"target"} names outputs and the values they
 ## must hold, @qcode{"adjust"} the inputs left free to achieve that, as
@@ -74,9 +79,9 @@
 ## @item @qcode{"initial"}
 ## start from an operating point (its @code{x}) or a state vector.
 ## @item @qcode{"maxiter"}
-## Newton iterations per attempt (default 60).
+## Newton iterations per attempt, a whole number in [1, 10000] (default 60).
 ## @item @qcode{"tol"}
-## scaled residual accepted as converged (default 1e-10).
+## scaled residual accepted as converged, in (0, 1) (default 1e-10).
 ## @item @qcode{"solver"}
 ## @qcode{"auto"} (dense up to 100 unknowns, else KLU), @qcode{"dense"}
 ## or @qcode{"klu"}.
@@ -173,7 +178,14 @@ function [ovr, opt] = parse_args (net, args)
                "vn_steady: %s must be a finite real scalar (%s)", name,
                q.unitofmeasure);
       endif
-      ovr(end+1) = struct ("q", q, "value", double (val));
+      [~, v, clip] = signal_range ("vn_steady", q, 0, double (val), true,
+                                "input");
+      if (! isempty (clip))
+        warning ("vesselnet:clipped",
+                 "vn_steady: input \"%s\" given as %.6g, outside its range [%.6g, %.6g]; the operating point uses it clipped to %.6g",
+                 name, val, clip.lo, clip.hi, v);
+      endif
+      ovr(end+1) = struct ("q", q, "value", v);
       continue;
     endif
     switch (lower (name))
@@ -195,15 +207,19 @@ function [ovr, opt] = parse_args (net, args)
       case "initial"
         opt.initial = val;
       case "maxiter"
-        if (! (isscalar (val) && isreal (val) && val >= 1 && val == fix (val)))
+        if (! (isnumeric (val) && isscalar (val) && isreal (val)
+               && val >= 1 && val <= 1e4 && val == fix (val)))
           error ("Octave:invalid-input-arg",
-                 "vn_steady: option \"maxiter\" must be a positive integer");
+                 "vn_steady: option \"maxiter\" must be a whole number in [1, 10000], got %s",
+                 build_value_str (val));
         endif
         opt.maxiter = val;
       case "tol"
-        if (! (isscalar (val) && isreal (val) && val > 0 && val < 1))
+        if (! (isnumeric (val) && isscalar (val) && isreal (val)
+               && val > 0 && val < 1))
           error ("Octave:invalid-input-arg",
-                 "vn_steady: option \"tol\" must lie in (0, 1)");
+                 "vn_steady: option \"tol\" must lie in (0, 1), got %s",
+                 build_value_str (val));
         endif
         opt.tol = val;
       case "solver"
@@ -426,6 +442,26 @@ endfunction
 %! assert (c.F1.flow, 0.015, 1e-8);       # coeff sqrt (2.25) = 0.015
 %!error <vn_steady: input "F1.flow": VALUE "1 m": "m" is a unit of length; VALUE allows units of flow> vn_steady (vn_feed (vn_tank (vn_network (), "T1", "area", 2), "F1", "T1"), "F1.flow", "1 m")
 
+%!test
+%! ## an opening past its travel is clipped, with a warning, and the
+%! ## operating point is the one at the clipped opening (invented data)
+%! net = vn_tank (vn_network (), "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 40, "opening", 0.5);
+%! warning ("off", "vesselnet:clipped", "local");
+%! a = vn_steady (net, "LV1.opening", 1.5);
+%! b = vn_steady (net, "LV1.opening", 1);
+%! assert (a.LV1.opening, 1);
+%! assert (a.inputs.LV1.opening, 1);
+%! assert (a.T1.level, b.T1.level, 1e-12);
+%!warning <vn_steady: input "LV1.opening" given as 1.5, outside its range \[0, 1\]; the operating point uses it clipped to 1>
+%! net = vn_feed (vn_tank (vn_network (), "T1", "area", 2, "level", 1), "F1", "T1", "flow", 0.01);
+%! vn_steady (vn_valve (net, "LV1", "T1", "", "kv", 40), "LV1.opening", 1.5);
+%!error <vn_steady: input "F1.flow": values must lie in \[-1e\+06, 1e\+06\] \(m3/s\), got 3e\+06$> vn_steady (vn_feed (vn_tank (vn_network (), "T1", "area", 2), "F1", "T1"), "F1.flow", 3e6)
+
+%!error <vn_steady: option "maxiter" must be a whole number in \[1, 10000\], got 1e\+06> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "maxiter", 1e6)
+%!error <vn_steady: option "tol" must lie in \(0, 1\), got 2> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "tol", 2)
+%!error <vn_steady: option "tol" must lie in \(0, 1\), got "tight"> vn_steady (vn_tank (vn_network (), "T1", "area", 2), "tol", "tight")
 %!error <2 target\(s\) but 1 adjusted>
 %! net = one_tank (true);
 %! vn_steady (net, "target", {"T1.level", 2, "T1.volume", 4}, "adjust", {"F1.flow"});

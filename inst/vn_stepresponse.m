@@ -123,6 +123,7 @@ function sr = vn_stepresponse (net, op, input, amount, varargin)
     endif
     du = amount / 100 * abs (before);
   endif
+  check_range (pnet, q, before, du);
 
   t = time_grid (opt, lin);
   ## Output values at the operating point, before the step.
@@ -154,6 +155,22 @@ function sr = vn_stepresponse (net, op, input, amount, varargin)
   sr.metrics = m(:);
   sr.metrics_linear = ml(:);
 
+endfunction
+
+## The stepped input must stay inside its range: refused here, under this
+## command's name, before any run (the physics would clip it, and the
+## steady state after the step would be refused by vn_steady).
+function check_range (net, q, before, du)
+  k = vn_schema ().(q.kind);
+  lo = k.lo(q.slot + 1);
+  hi = k.hi(q.slot + 1);
+  v = before + du;
+  if (! (v >= lo && v <= hi))
+    error ("Octave:invalid-input-arg",
+           "vn_stepresponse: %s \"%s\": %s %g %+g = %g after the step lies outside [%g, %g] (%s); give a SIZE that keeps it inside",
+           q.kind, net.units(q.unit).name, q.var, before, du, v, lo, hi,
+           q.unitofmeasure);
+  endif
 endfunction
 
 function opt = parse_options (args)
@@ -238,7 +255,11 @@ function [Y, x0, xend] = nonlinear (net, x, u, t, names, opt)
   if (! isempty (opt.abstol))
     tol = [tol, {"abstol", opt.abstol}];
   endif
-  res = vn_simulate (net, t, u, "initial", x, tol{:});
+  try
+    res = vn_simulate (net, t, u, "initial", x, tol{:});
+  catch err
+    vn_rethrow (err, "vn_stepresponse");
+  end_try_catch
   x0 = res.x(1,:).';
   xend = res.x(end,:).';
   Y = zeros (numel (t), numel (names));
@@ -258,7 +279,7 @@ function y = nonlinear_final (net, input, value, xend, names)
   catch err
     if (! any (strcmp (err.identifier, {"vesselnet:no-steady-state",
                                         "vesselnet:solver-failure"})))
-      rethrow (err);
+      vn_rethrow (err, "vn_stepresponse");
     endif
     return;
   end_try_catch
@@ -341,3 +362,12 @@ endfunction
 %!error <option "t"> vn_stepresponse (net, op, "F1.flow", 1e-3, "T1.level", "t", [5 1])
 %!error <unknown option> vn_stepresponse (net, op, "F1.flow", 1e-3, "T1.level", "speed", 1)
 %!error vn_stepresponse (net, op, "F1.flow")
+%!shared vnet, vop
+%! vnet = vn_network ("valve tank");
+%! vnet = vn_tank (vnet, "T1", "area", 2, "level", 1);
+%! vnet = vn_feed (vnet, "F1", "T1", "flow", 0.01);
+%! vnet = vn_valve (vnet, "V1", "T1", "", "kv", 100, "opening", 0.6);
+%! vop = vn_steady (vnet);
+%!error <^vn_stepresponse: valve "V1": opening 0.6 \+0.5 = 1.1 after the step lies outside \[0, 1\]> vn_stepresponse (vnet, vop, "V1.opening", 0.5, "T1.level")
+%!error <^vn_stepresponse: valve "V1": opening 0.6 -0.7 = -0.1> vn_stepresponse (vnet, vop, "V1.opening", -0.7, "T1.level")
+%!error <^vn_stepresponse: valve "V1": opening 0.6 -0.72 = -0.12> vn_stepresponse (vnet, vop, "V1.opening", -120, "T1.level", "percent", true)

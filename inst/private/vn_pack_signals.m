@@ -9,6 +9,14 @@
 ## @var{u}) on inputs that are not outputs of their unit, with
 ## @code{sig.hunit} and @code{sig.hvar}: the result gets those from the
 ## signal, not from the core.
+##
+## Each table is checked against its input's range (@code{signal_range}):
+## non-finite points, and values outside the range of an input with a unit
+## of measure, are errors under @var{caller}; a position (valve opening,
+## pump speed) past its travel is clipped exactly.  @code{sig.u} holds the
+## signals as the core gets them (clipped), for the result, and
+## @code{sig.clips} the clipped ones as given, for
+## @code{signal_clip_warn}.
 ## @end deftypefn
 
 function sig = vn_pack_signals (net, u, caller, cn)
@@ -40,6 +48,8 @@ function sig = vn_pack_signals (net, u, caller, cn)
   hold = zeros (1, m, "int32");
   data = cell (1, m);
   seen = {};
+  clips = [];
+  uc = u;
   pos = 0;
   held = false (1, m);
   hunit = hvar = cell (1, m);
@@ -59,6 +69,11 @@ function sig = vn_pack_signals (net, u, caller, cn)
              "%s: signal on \"%s\" needs as many times as values (got %d and %d)",
              caller, q.name, numel (t), numel (v));
     endif
+    [t, v, c] = signal_range (caller, q, double (t), double (v),
+                              logical (u(i).hold));
+    clips = [clips, c];
+    uc(i).t = t;
+    uc(i).v = v;
     held(i) = ! any (strcmp (s.(q.kind).outputs, q.var));
     hunit{i} = q.uname;
     hvar{i} = q.var;
@@ -79,6 +94,8 @@ function sig = vn_pack_signals (net, u, caller, cn)
   sig.held = find (held);
   sig.hunit = hunit(held);
   sig.hvar = hvar(held);
+  sig.u = uc;
+  sig.clips = clips;
   if (! strcmp (getenv ("VN_COMPILE_CACHE"), "0"))
     keys = [{key}, keys(1:min (end, 7))];
     items = [{sig}, items(1:min (end, 7))];

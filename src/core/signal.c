@@ -59,6 +59,14 @@ int vn_set_signals (vn_net *net, int nsig, const int *unit, const int *slot,
             return vn_fail (net, VN_EARG, "signal on %s.%s: point %d is "
                             "not finite (t %g, value %g)", u->name,
                             u->k->par[slot[i]].name, k + 1, t, v);
+          /* the input's schema range, as for a declared value: the
+           * callers clip a position past its travel before packing */
+          const vn_param_info *pi = &u->k->par[slot[i]];
+          if (v < pi->lo || v > pi->hi)
+            return vn_fail (net, VN_EARG, "signal on %s.%s: point %d "
+                            "(t %g) value %g lies outside [%g, %g] (%s)",
+                            u->name, pi->name, k + 1, t, v, pi->lo, pi->hi,
+                            pi->unit);
           if (k > 0 && t < data[2 * ((long) off[i] + k - 1)])
             return vn_fail (net, VN_EARG, "signal on %s.%s: times must "
                             "not decrease, point %d at t %g follows %g",

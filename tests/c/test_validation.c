@@ -416,6 +416,15 @@ static void after_build (void)
   VT_CHECK (st == VN_EARG && has (vn_errmsg (net), "F1.flow", "not finite",
                                   "point 2"),
             "signal with a NaN value: \"%s\"", vn_errmsg (net));
+  data[3] = 3e6;     /* beyond the feed's 1e6 m3/s, as at declaration */
+  st = vn_set_signals (net, 1, &unit, &fslot, &off, &len, NULL, data);
+  VT_CHECK (st == VN_EARG && has (vn_errmsg (net), "F1.flow", "point 2",
+                                  "3e+06 lies outside [-1e+06, 1e+06]"),
+            "signal beyond the feed's range: \"%s\"", vn_errmsg (net));
+  data[3] = -1e6;
+  st = vn_set_signals (net, 1, &unit, &fslot, &off, &len, NULL, data);
+  VT_CHECK (st == VN_OK, "signal at the end of the feed's range: \"%s\"",
+            st ? vn_errmsg (net) : "ok");
 
   st = vn_param_set (net, 999, 1);
   VT_CHECK (st == VN_EARG && has (vn_errmsg (net), "parameter index 999",

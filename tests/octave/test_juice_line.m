@@ -1,0 +1,615 @@
+## Acceptance checks of the "answers an engineer can trust" behaviours on
+## an invented juice line (invented data, no real plant): a lying
+## receiving tank RT1, an elevated buffer BT1 that spills into a catch
+## tank CT1, a conical hopper HP1, a spherical filler buffer SB1, pumps,
+## valves and an orifice, two PI level loops, a sight tube ST1 of 1e-6 m2
+## and a flush-water reservoir WR1 of 1e4 m2; time constants from 5 s to
+## 7 h.  Every number is checked against a computation outside the
+## command under test (two vn_steady points, closed forms, quadrature,
+## Octave's ode15s on equations written out here), named beside it.
+##
+## Run from the top of the checkout:
+##   octave-cli --eval 'addpath inst build/oct; test ("tests/octave/test_juice_line.m")'
+
+## The line.  Steady flow 0.010 m3/s (36 m3/h) from the truck feed F1
+## through P1, FV1, O1 and LV2 to the filler.  RT1 lies on its side
+## (D 2.4 m, L 6 m); BT1 stands 8 m up and spills into CT1 above 2.5 m
+## (not at the operating point, so CT1 sits empty and idle); O1 drops
+## into SB1 above its surface (inlet 1.7 m).  With LOOPS, LC1 holds RT1
+## with P1's speed and LC2 holds SB1 with LV2, both direct acting.
+%!function net = juice_line (loops)
+%!  net = vn_network ("invented juice line");
+%!  net = vn_tank (net, "RT1", "shape", "horizontal", "diameter", 2.4, "length", 6, "level", 1.2);
+%!  net = vn_tank (net, "CT1", "area", 1.5, "rim", 2.0, "level", 0);
+%!  net = vn_tank (net, "BT1", "area", 3, "base", 8, "rim", 2.5, "spill", "CT1", "level", 1.2);
+%!  net = vn_tank (net, "HP1", "shape", "cone", "diameter", 1.6, "height", 2.0, "base", 2, "level", 1.2);
+%!  net = vn_tank (net, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%!  net = vn_tank (net, "ST1", "area", 1e-6, "rim", 0.5, "level", 0);
+%!  net = vn_tank (net, "WR1", "area", 1e4, "base", 20, "level", 0.8);
+%!  net = vn_feed (net, "F1", "RT1", "flow", 0.010);
+%!  net = vn_pump (net, "P1", "RT1", "BT1", "shutoff", 22, "k", 3e4, "speed", 0.707);
+%!  net = vn_valve (net, "FV1", "BT1", "HP1", "kv", 100, "opening", 0.5, "inlet", 1.9);
+%!  net = vn_orifice (net, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%!  net = vn_valve (net, "LV2", "SB1", "", "kv", 300, "opening", 0.4);
+%!  net = vn_feed (net, "F4", "ST1", "flow", 2e-9);
+%!  net = vn_resistance (net, "R4", "ST1", "", "r", 5e6);
+%!  net = vn_feed (net, "F3", "WR1", "flow", 0.4);
+%!  net = vn_resistance (net, "R3", "WR1", "", "r", 2);
+%!  if (loops)
+%!    net = vn_controller (net, "LC1", "measure", "RT1.level", "manipulate", "P1.speed", ...
+%!                         "setpoint", 1.2, "gain", 0.5, "reset", 1800, "action", "direct", "limits", [0 1.1]);
+%!    net = vn_controller (net, "LC2", "measure", "SB1.level", "manipulate", "LV2.opening", ...
+%!                         "setpoint", 0.9, "gain", 2, "reset", 300, "action", "direct", "limits", [0 1]);
+%!  endif
+%!endfunction
+
+## The value of quantity "UNIT.VARIABLE" in an operating point or result.
+%!function v = qv (s, q)
+%!  d = find (q == ".", 1);
+%!  v = s.(q(1:d-1)).(q(d+1:end));
+%!endfunction
+
+## Steady gains by central differences of two vn_steady operating points,
+## input u0 -/+ h with h = 1e-4 |u0| (outputs x inputs); the truncation
+## error is O(h^2), far below the 1e-6 asked of the linear gains.
+%!function G = steady_diff (net, op, ins, outs, varargin)
+%!  G = zeros (numel (outs), numel (ins));
+%!  for j = 1:numel (ins)
+%!    u0 = op.input_values(strcmp (op.input_names, ins{j}));
+%!    h = 1e-4 * abs (u0);
+%!    o = cell (1, 2);
+%!    for k = 1:2
+%!      o{k} = vn_steady (net, ins{j}, u0 + (2 * k - 3) * h, "initial", op, "tol", 1e-14, varargin{:});
+%!    endfor
+%!    for i = 1:numel (outs)
+%!      G(i,j) = (qv (o{2}, outs{i}) - qv (o{1}, outs{i})) / (2 * h);
+%!    endfor
+%!  endfor
+%!endfunction
+
+## Finite gains agree to 1e-6 relative; a gain the differences show as
+## zero (below 1e-7 of its column's largest) must be zero to the same.
+%!function check_gains (L, G)
+%!  assert (all (isfinite (L(:))), sprintf ("gains %s", mat2str (L, 5)));
+%!  scale = max (abs (G), [], 1);
+%!  for j = 1:columns (G)
+%!    for i = 1:rows (G)
+%!      if (abs (G(i,j)) > 1e-7 * scale(j))
+%!        assert (L(i,j), G(i,j), 1e-6 * abs (G(i,j)));
+%!      else
+%!        assert (abs (L(i,j)) <= 1e-7 * scale(j), sprintf ("gain (%d,%d) %g, expected 0", i, j, L(i,j)));
+%!      endif
+%!    endfor
+%!  endfor
+%!endfunction
+
+%!shared g
+%! g = 9.80665;
+
+## ---------------------------------------------------------------- item 1
+
+%!test
+%! ## Open line (no loops): CT1 is idle (no flow in or out), tau from 5 s
+%! ## (sight tube) to 7 h (RT1 on its pump curve), plus CT1's free
+%! ## integrator.  Every gain equals the difference of two vn_steady
+%! ## points; the idle CT1 gets 0, never Inf, and spoils no other gain.
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! assert (op.CT1.level, 0);
+%! assert (op.P1.flow, 0.010, 1e-12);
+%! ins = {"F1.flow", "P1.speed", "FV1.opening", "LV2.opening"};
+%! outs = {"RT1.level", "BT1.level", "CT1.level", "HP1.level", "SB1.level", "O1.flow", "P1.flow"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs));
+%! ## CT1's row is exactly zero (it holds no flow at the operating point)
+%! assert (lin.gain(3,:), zeros (1, 4));
+%! ## time constants span seconds to hours: sight tube A r = 5 s, reservoir
+%! ## A r = 2e4 s (linear resistances, exact)
+%! tau = lin.tau(isfinite (lin.tau));
+%! assert (min (abs (tau - 5)), 0, 1e-9 * 5);
+%! assert (min (abs (tau - 2e4)), 0, 1e-9 * 2e4);
+%! assert (max (tau) > 2e4);
+
+%!test
+%! ## Closed loops: integral action makes the controlled levels' gains
+%! ## exactly 0, the controller outputs move by the difference quotient
+%! net = juice_line (true);
+%! op = vn_steady (net);
+%! assert ([op.RT1.level op.SB1.level], [1.2 0.9], 1e-9);
+%! ins = {"F1.flow", "FV1.opening", "LC2.setpoint"};
+%! outs = {"RT1.level", "BT1.level", "CT1.level", "SB1.level", "LC1.output", "LC2.output"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs));
+%! assert (lin.gain([1 4], 1:2), zeros (2, 2), 1e-9);
+%! assert (lin.gain(4, 3), 1, 1e-9);
+
+%!test
+%! ## A truly integrating pair reports a signed Inf.  CIP tank KT1 is
+%! ## emptied by a fixed-flow pump, so its level ignores its own outflow:
+%! ## +Inf for its feed, -Inf for the pump's speed.  KT2 behind the pump
+%! ## drains through an orifice: h = (q s / c)^2, dh/ds = 2 q^2 s / c^2
+%! ## = 2 m at s = 1 (orifice law, closed form).
+%! k = vn_network ("invented CIP set");
+%! k = vn_tank (k, "KT1", "area", 2, "level", 1);
+%! k = vn_tank (k, "KT2", "area", 1, "level", 1);
+%! k = vn_feed (k, "F5", "KT1", "flow", 0.002);
+%! k = vn_pump (k, "P5", "KT1", "KT2", "flow", 0.002);
+%! k = vn_orifice (k, "O5", "KT2", "", "coeff", 0.002);
+%! lin = vn_linearize (k, vn_steady (k), {"F5.flow", "P5.speed"}, {"KT1.level", "KT2.level", "O5.flow"});
+%! assert (lin.gain(1,:), [Inf -Inf]);
+%! assert (lin.gain(2:3,:), [0 2; 0 0.002], 1e-9);
+
+%!test
+%! ## RGA of the 2 x 2 block {RT1, BT1} x {F1, FV1} of the open line:
+%! ## vn_rga on the model equals Bristol's G .* inv (G).' on the gains
+%! ## from two vn_steady points (Bristol 1966; memory)
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! ins = {"F1.flow", "FV1.opening"};  outs = {"RT1.level", "BT1.level"};
+%! G = steady_diff (net, op, ins, outs);
+%! R = vn_rga (vn_linearize (net, op, ins, outs));
+%! assert (R, G .* inv (G).', 1e-5 * max (abs (R(:))));
+
+%!test
+%! ## Step response: the final change and gain are those of the nonlinear
+%! ## plant (vn_steady after and before the step, not the linear gain);
+%! ## t63 is where the simulated response crosses 63.2 % of it; the idle
+%! ## catch tank reports a zero change, not Inf or NaN
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! du = 0.0005;                            # 5 % more juice
+%! outs = {"RT1.level", "BT1.level", "CT1.level", "HP1.level"};
+%! sr = vn_stepresponse (net, op, "F1.flow", du, outs);
+%! o2 = vn_steady (net, "F1.flow", 0.010 + du, "initial", op, "tol", 1e-12);
+%! fin = cellfun (@(q) qv (o2, q) - qv (op, q), outs);
+%! assert (fin(3), 0);
+%! assert ([sr.metrics.final], fin, 1e-6 * max (abs (fin)));
+%! assert ([sr.metrics.gain], fin / du, 1e-6 * max (abs (fin)) / du);
+%! ## the linear gain differs by the curvature (pump curve, Torricelli),
+%! ## so the two are told apart here
+%! assert (abs (sr.lin.gain(1) * du - fin(1)) > 1e-2 * abs (fin(1)));
+%! ## default run: 5 times the slowest finite time constant
+%! assert (sr.t(end), 5 * max (sr.lin.tau(isfinite (sr.lin.tau))), 1e-9 * sr.t(end));
+%! for j = [1 2 4]
+%!   y = sr.nonlinear(:,j);
+%!   i = find (y >= 0.632 * fin(j), 1);
+%!   t63 = interp1 (y(i-1:i), sr.t(i-1:i), 0.632 * fin(j));
+%!   assert (sr.metrics(j).t63, t63, 0.01 * t63);
+%! endfor
+%! assert (sr.metrics(3).gain, 0);
+%! assert (all (sr.nonlinear(:,3) == 0));
+
+## ---------------------------------------------------------------- item 2
+
+%!test
+%! ## End of a run: feed stopped, FV1 shut.  The hopper (cone) drains
+%! ## through O1 into the sphere, which the filler pump P2 (fixed flow
+%! ## 0.004 m3/s) empties.  Both run dry; nothing delivers liquid it does
+%! ## not hold: the filler gets exactly what the two held, levels never go
+%! ## below -1e-6 m, and the dry sphere stays at zero with no flow.
+%! n = vn_network ("invented juice line, run-out");
+%! n = vn_tank (n, "HP1", "shape", "cone", "diameter", 1.6, "height", 2.0, "base", 2, "level", 1.2);
+%! n = vn_tank (n, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%! n = vn_tank (n, "FB1", "area", 4, "level", 0.1);        # filler bowl
+%! n = vn_orifice (n, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%! n = vn_pump (n, "P2", "SB1", "FB1", "flow", 0.004);
+%! res = vn_simulate (n, [0 1e4], "dt", 20);
+%! ## volumes from the geometry (cone pi R^2 h^3 / (3 H^2); sphere
+%! ## pi h^2 (R - h/3); memory)
+%! V0 = pi * 0.8^2 * 1.2^3 / (3 * 2^2) + pi * 0.9^2 * (0.9 - 0.9 / 3);
+%! assert (res.HP1.volume(1) + res.SB1.volume(1), V0, 1e-9 * V0);
+%! assert (res.FB1.volume(end) - res.FB1.volume(1), V0, 1e-6 * V0);
+%! tot = res.HP1.volume + res.SB1.volume + res.FB1.volume;
+%! assert (tot, tot(1) * ones (size (tot)), 1e-9 * tot(1));
+%! assert (min ([res.HP1.level; res.SB1.level]) >= -1e-6);
+%! late = res.t > 3 * V0 / 0.004;
+%! assert (any (late));
+%! assert (max (abs (res.SB1.volume(late))) <= 1e-6 * V0);
+%! assert (max (abs (res.P2.flow(late))) <= 1e-5 * 0.004);
+%! ## before the sphere runs dry its volume falls by P2's fixed flow
+%! ## (it receives O1's flow too, so check the sum of both vessels)
+%! early = res.t < 0.5 * V0 / 0.004;
+%! assert (tot(early) - res.FB1.volume(early), V0 - 0.004 * res.t(early), 1e-6 * V0);
+
+%!test
+%! ## The hopper alone drained to the floor drain through a 30 mm
+%! ## sharp-edged bore at its apex: h(t) = (h0^2.5 - 5 Cd a sqrt(2 g) H^2
+%! ## t / (2 pi R^2))^0.4, empty at T = 2 pi R^2 h0^2.5 / (5 H^2 Cd a
+%! ## sqrt(2 g)) (standard fluid-mechanics exercise, cone apex down).
+%! ## Its work stays within a small factor of a prism of the rim's area.
+%! R = 0.8;  H = 2;  h0 = 1.6;  cd = 0.61;  a = pi / 4 * 0.03^2;
+%! c = cd * a * sqrt (2 * g);
+%! T = 2 * pi * R^2 * h0^2.5 / (5 * H^2 * c);
+%! n = vn_network ("invented hopper drain");
+%! n = vn_tank (n, "HP1", "shape", "cone", "diameter", 2 * R, "height", H, "level", h0);
+%! n = vn_orifice (n, "D1", "HP1", "", "diameter", 0.03, "cd", cd);
+%! res = vn_simulate (n, [0 1.5 * T], "dt", T / 300);
+%! ## the time each simulated level is reached, from the closed form
+%! ## (the level falls ever faster as the apex nears, so compare times)
+%! up = res.HP1.level > 0.1;
+%! tc = 2 * pi * R^2 * (h0^2.5 - res.HP1.level(up).^2.5) / (5 * H^2 * c);
+%! assert (tc, res.t(up), 3e-5 * T);
+%! assert (min (res.HP1.level) >= -1e-6);
+%! i = find (res.t >= T, 1);
+%! assert (res.HP1.level(i) < 0.1);
+%! assert (res.HP1.level(end) < 0.02);
+%! ## a prism of the rim's area on the same bore, over its own emptying
+%! ## time T = 2 A sqrt(h0) / (Cd a sqrt(2 g)) (Torricelli; memory)
+%! Tp = 2 * pi * R^2 * sqrt (h0) / c;
+%! p = vn_network ("invented prism drain");
+%! p = vn_tank (p, "PR1", "area", pi * R^2, "level", h0);
+%! p = vn_orifice (p, "D1", "PR1", "", "diameter", 0.03, "cd", cd);
+%! rp = vn_simulate (p, [0 1.5 * Tp], "dt", Tp / 300);
+%! assert (rp.PR1.level(rp.t < 0.9 * Tp), (sqrt (h0) - c * rp.t(rp.t < 0.9 * Tp) / (2 * pi * R^2)).^2, 1e-4 * h0);
+%! assert (res.stats.steps <= 4 * rp.stats.steps, sprintf ("cone %d steps, prism %d", res.stats.steps, rp.stats.steps));
+
+%!test
+%! ## The lying receiving tank emptied through its bottom valve (Kv 40,
+%! ## opening 0.6, linear) to the drain.  The valve law is a square root:
+%! ## Q = Kv x / 3600 sqrt(rho0 g h / 1e5) with rho0 = 999.1 kg/m3 as
+%! ## vesselnet documents (IEC 60534-2-1 liquid sizing), so the time to
+%! ## each level is the integral of A(s) / (k sqrt(s)) with the plan area
+%! ## A = 2 L sqrt(s (D - s)) (vessel geometry; memory), by quadgk.
+%! D = 2.4;  L = 6;  h0 = 2.0;
+%! k = 40 * 0.6 / 3600 * sqrt (999.1 * g / 1e5);
+%! n = vn_network ("invented receiving tank drain");
+%! n = vn_tank (n, "RT1", "shape", "horizontal", "diameter", D, "length", L, "level", h0);
+%! n = vn_valve (n, "DV1", "RT1", "", "kv", 40, "opening", 0.6);
+%! tq = @(h) quadgk (@(s) 2 * L * sqrt (s .* (D - s)) ./ (k * sqrt (s)), h, h0, "RelTol", 1e-10);
+%! T = tq (0);
+%! res = vn_simulate (n, [0 1.3 * T], "dt", T / 200);
+%! for h = [1.5 1.0 0.5 0.2]
+%!   i = find (res.RT1.level <= h, 1);
+%!   ts = interp1 (res.RT1.level(i-1:i), res.t(i-1:i), h);
+%!   assert (ts, tq (h), 2e-4 * T);
+%! endfor
+%! assert (min (res.RT1.level) >= -1e-6);
+%! assert (res.RT1.level(end) < 0.01);
+
+## ---------------------------------------------------------------- item 3
+
+%!test
+%! ## Sight tube (1e-6 m2) and reservoir (1e4 m2) in the same line, both
+%! ## started away from their steady levels: each follows its first-order
+%! ## closed form h = h_inf + (h0 - h_inf) exp(-t / (A r)) (linear
+%! ## resistance, exact), the sight tube rising monotonically to its
+%! ## 0.010 m without overshoot (it once peaked at 0.044 m).
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! x0 = op.x;
+%! x0(strcmp (op.states, "ST1.volume")) = 0;
+%! x0(strcmp (op.states, "WR1.volume")) = 1e4 * 0.5;
+%! res = vn_simulate (net, [0:0.25:40, 60:60:3e4], "initial", x0);
+%! ## below 1 mm (the network's "smooth" band) the liquid gate holds back
+%! ## the outflow, as documented, so compare once that has died out
+%! hst = 2e-9 * 5e6 * (1 - exp (-res.t / 5));
+%! late = res.t >= 20;
+%! assert (res.ST1.level(late), hst(late), 1e-4 * 0.010);
+%! assert (res.ST1.level(end), 0.010, 1e-6 * 0.010);
+%! assert (max (res.ST1.level) <= 0.010 * (1 + 1e-4));
+%! ## monotone to within the tolerances (1e-6 relative, 1e-8 m of level)
+%! assert (all (diff (res.ST1.level) >= -1e-5 * 0.010));
+%! hwr = 0.8 + (0.5 - 0.8) * exp (-res.t / 2e4);
+%! assert (res.WR1.level, hwr, 1e-5 * 0.8);    # reltol 1e-6, global error
+%! ## the rest of the line stays at its operating point
+%! assert (res.SB1.level, op.SB1.level * ones (size (res.t)), 1e-6);
+
+%!test
+%! ## The rule is documented where users read it, and "abstol" stays an
+%! ## override that changes the run
+%! assert (! isempty (strfind (help ("vn_simulate"), "abstol")));
+%! assert (! isempty (regexp (help ("vn_simulate"), "per\\s+state")));
+%! fid = fopen (fullfile (fileparts (which ("vn_simulate")), "..", "doc", "methods.md"));
+%! txt = fread (fid, Inf, "*char").';  fclose (fid);
+%! assert (! isempty (regexp (txt, "[Aa]bsolute tolerance")));
+%! net = juice_line (false);
+%! r1 = vn_simulate (net, [0 600]);
+%! r2 = vn_simulate (net, [0 600], "abstol", 1e-3);
+%! assert (r1.stats.steps != r2.stats.steps);
+
+%!test
+%! ## The filler feed alone, hopper -> orifice -> sphere -> LV2 under LC2,
+%! ## against Octave's ode15s on the equations written out here: levels
+%! ## as states with A dh/dt = in - out, cone A = pi (R h / H)^2, sphere
+%! ## A = pi h (D - h) (vessel geometry; memory), the orifice dropping in
+%! ## above the sphere's surface (head to its inlet elevation), the valve
+%! ## Q = Kv x / 3600 sqrt(rho0 g h / 1e5) (IEC 60534-2-1, rho0 999.1 as
+%! ## documented), ideal PI x = bias + Kc (e + int e / Ti), e = y - sp
+%! ## (direct action).  A 20 % feed step from the operating point.
+%! n = vn_network ("invented filler feed");
+%! n = vn_tank (n, "HP1", "shape", "cone", "diameter", 1.6, "height", 2.0, "base", 2, "level", 1.2);
+%! n = vn_tank (n, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%! n = vn_feed (n, "F1", "HP1", "flow", 0.010);
+%! n = vn_orifice (n, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%! n = vn_valve (n, "LV2", "SB1", "", "kv", 300, "opening", 0.4);
+%! n = vn_controller (n, "LC2", "measure", "SB1.level", "manipulate", "LV2.opening", ...
+%!                    "setpoint", 0.9, "gain", 2, "reset", 300, "action", "direct", "limits", [0 1]);
+%! op = vn_steady (n);
+%! tt = [0 30 60 120 240 480 900 1500];
+%! res = vn_simulate (n, tt, vn_signal ("F1.flow", "step", 0, 0.010, 0.012), "initial", op, "reltol", 1e-9);
+%! Kc = 2;  Ti = 300;  bias = 0.4;  sp = 0.9;
+%! kval = 300 / 3600 * sqrt (999.1 * g / 1e5);
+%! x = @(z) bias + Kc * (z(2) - sp) + z(3);
+%! f = @(t, z) [(0.012 - 0.008 * sqrt (z(1) + 2 - 1.7)) / (pi * (0.8 * z(1) / 2)^2);
+%!              (0.008 * sqrt (z(1) + 2 - 1.7) - kval * x (z) * sqrt (z(2))) / (pi * z(2) * (1.8 - z(2)));
+%!              Kc / Ti * (z(2) - sp)];
+%! z0 = [op.HP1.level; op.SB1.level; op.LV2.opening - bias];
+%! [~, Z] = ode15s (f, tt, z0, odeset ("RelTol", 1e-10, "AbsTol", 1e-12));
+%! assert (res.HP1.level, Z(:,1), 1e-6);
+%! assert (res.SB1.level, Z(:,2), 1e-6);
+%! assert (res.LV2.opening, bias + Kc * (Z(:,2) - sp) + Z(:,3), 1e-6);
+%! ## and the operating point itself: HP1 passes the feed through O1
+%! assert (op.HP1.level, (0.010 / 0.008)^2 - 0.3, 1e-9);
+
+## ---------------------------------------------------------------- item 4
+
+%!test
+%! ## A bump test with no dead time: the pasteuriser balance tank on a
+%! ## linear outlet (A 2 m2, r 500 s/m2: K = r = 500 m/(m3/s), tau = A r
+%! ## = 1000 s, exact first order).  The fit reports a dead time of exactly
+%! ## 0; SIMC then refuses without "tauc" and asks for it; with tauc it
+%! ## gives Kc = tau / (K tauc), Ti = min (tau, 4 tauc) (Skogestad 2003).
+%! n = vn_network ("invented pasteuriser balance tank");
+%! n = vn_tank (n, "PB1", "area", 2, "level", 2.5);
+%! n = vn_feed (n, "F1", "PB1", "flow", 0.005);
+%! n = vn_resistance (n, "R1", "PB1", "", "r", 500);
+%! for tstep = [200 450]
+%!   res = vn_simulate (n, 0:10:6000, vn_signal ("F1.flow", "step", tstep, 0.005, 0.006), "reltol", 1e-9);
+%!   m = vn_fopdt (res.t, res.F1.flow, res.PB1.level);
+%!   assert (m.deadtime, 0);
+%!   assert ([m.gain m.tau], [500 1000], 1e-4 * [500 1000]);
+%!   assert (all (isfinite ([m.gain m.tau])));
+%!   try
+%!     vn_tune (m, "simc");
+%!     error ("no refusal");
+%!   catch err
+%!     assert (regexp (err.message, "^vn_tune: .*\"tauc\"", "once"));
+%!   end_try_catch
+%!   p = vn_tune (m, "simc", "tauc", 250);
+%!   assert ([p.Kc p.Ti], [m.tau / (m.gain * 250), min(m.tau, 1000)], 1e-12);
+%!   assert (isfinite (p.Kc) && p.Ti > 1);
+%! endfor
+
+%!test
+%! ## The same for an integrating test: the CIP tank on a fixed-flow pump
+%! ## (k' = 1 / A = 0.5 m/s per m3/s, no dead time); SIMC integrating:
+%! ## Kc = 1 / (k' tauc), Ti = 4 tauc (Skogestad 2003)
+%! k = vn_network ("invented CIP tank");
+%! k = vn_tank (k, "KT1", "area", 2, "level", 1);
+%! k = vn_feed (k, "F5", "KT1", "flow", 0.002);
+%! k = vn_pump (k, "P5", "KT1", "", "flow", 0.002);
+%! res = vn_simulate (k, 0:5:1500, vn_signal ("F5.flow", "step", 300, 0.002, 0.0025));
+%! m = vn_fopdt (res.t, res.F5.flow, res.KT1.level, "integrating");
+%! assert (m.deadtime, 0);
+%! assert (m.gain, 0.5, 1e-4);
+%! try
+%!   vn_tune (m, "simc");
+%!   error ("no refusal");
+%! catch err
+%!   assert (regexp (err.message, "^vn_tune: .*\"tauc\"", "once"));
+%! end_try_catch
+%! p = vn_tune (m, "simc", "tauc", 120);
+%! assert ([p.Kc p.Ti], [1 / (m.gain * 120), 480], 1e-9);
+
+## ---------------------------------------------------------------- item 5
+
+%!test
+%! ## Names that collide with result fields are refused at declaration,
+%! ## by every builder, with the reserved names listed
+%! net = juice_line (false);
+%! calls = {@(nm) vn_tank (net, nm, "area", 1), ...
+%!          @(nm) vn_feed (net, nm, "RT1", "flow", 0.001), ...
+%!          @(nm) vn_orifice (net, nm, "CT1", "", "coeff", 0.001), ...
+%!          @(nm) vn_valve (net, nm, "CT1", "", "kv", 5), ...
+%!          @(nm) vn_pump (net, nm, "CT1", "RT1", "flow", 0.001), ...
+%!          @(nm) vn_controller (net, nm, "measure", "BT1.level", "manipulate", "FV1.opening", "setpoint", 1, "gain", 1)};
+%! for nm = {"t", "x", "y", "stats", "states", "events", "units"}
+%!   for c = 1:numel (calls)
+%!     try
+%!       calls{c} (nm{1});
+%!       error ("no refusal for %s", nm{1});
+%!     catch err
+%!       assert (err.identifier, "Octave:invalid-input-arg");
+%!       assert (regexp (err.message, ["^vn_\\w+: \\w+ \"" nm{1} "\".*reserved.*stats"], "once"));
+%!     end_try_catch
+%!   endfor
+%! endfor
+%! ## a harmless name still works and its results stay intact
+%! n2 = vn_tank (net, "tank9", "area", 1);
+%! res = vn_simulate (n2, [0 10]);
+%! assert (isnumeric (res.t) && iscolumn (res.t));
+
+## ---------------------------------------------------------------- item 6
+
+%!test
+%! ## res.stats totals the whole run: twenty days of a daily feed schedule
+%! ## (breakpoints at each midnight) against the same run done as twenty
+%! ## one-day runs, each from where the last ended
+%! net = juice_line (true);
+%! op = vn_steady (net);
+%! days = 20;
+%! day = (0:days)';
+%! feed = 0.010 + 0.001 * mod (day, 2);
+%! tab = [day * 86400, feed];
+%! u = vn_signal ("F1.flow", "table", tab);
+%! r = vn_simulate (net, [0 days * 86400], u, "initial", op, "dt", 3600);
+%! steps = 0;  x = op.x;
+%! for d = 1:days
+%!   rd = vn_simulate (net, [d-1, d] * 86400, u, "initial", x, "dt", 3600);
+%!   steps += rd.stats.steps;
+%!   x = rd.x(end,:).';
+%! endfor
+%! assert (r.stats.restarts, days - 1);         # each interior midnight
+%! assert (r.stats.t_reached, days * 86400);
+%! assert (r.stats.steps >= 0.5 * steps && r.stats.steps <= 2 * steps, ...
+%!         sprintf ("one run %d steps, day by day %d", r.stats.steps, steps));
+%! r2 = vn_simulate (net, [0 2 * 86400], u, "initial", op, "dt", 3600);
+%! assert (r.stats.steps > 4 * r2.stats.steps);
+%! assert (r.stats.rhs >= r.stats.steps);
+
+## ---------------------------------------------------------------- item 8
+
+%!test
+%! ## A level switch on the catch tank starts the return pump P3 (fixed
+%! ## flow, back to RT1).  Frozen (CT1 empty, the pump off) the operating
+%! ## point linearises with the switch holding its output, and the gains
+%! ## equal the differences of two frozen operating points.
+%! net = juice_line (true);
+%! net = vn_pump (net, "P3", "CT1", "RT1", "flow", 0.004, "speed", 0);
+%! net = vn_switch (net, "LS1", "measure", "CT1.level", "manipulate", "P3.speed", "on", 1.0, "off", 0.2);
+%! op = vn_steady (net, "freeze", true);
+%! assert (op.frozen, {"LS1"});
+%! assert (op.P3.flow, 0);
+%! ins = {"F1.flow", "FV1.opening"};
+%! outs = {"RT1.level", "BT1.level", "CT1.level", "LC1.output", "LC2.output", "P3.flow"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs, "freeze", true));
+%! ## the held switch adds no state and keeps P3 off in the model
+%! assert (lin.gain(end,:), [0 0]);
+%! assert (! any (strncmp (lin.states, "LS1", 3)));
+%! ## and the frozen point is a rest point of the full network
+%! res = vn_simulate (net, [0 600], "initial", op);
+%! assert (res.BT1.level, op.BT1.level * ones (size (res.t)), 1e-8);
+%! assert (isempty (res.events.t));
+
+## ---------------------------------------------------------------- item 9
+
+%!test
+%! ## A valve at a bound linearises with the one-sided derivative from
+%! ## inside: the juice line's filler valve LV2 is shut (opening 0) and a
+%! ## drain orifice takes the flow.  B's column is -Kv f'(0) / 3600
+%! ## sqrt(rho0 g h / 1e5) (IEC 60534-2-1; linear f' = 1, equal
+%! ## percentage run linearly to 0 below 0.02 as documented, so f' =
+%! ## R^-0.98 / 0.02), and the gain is the forward difference of two
+%! ## operating points (opening 0 and 1e-7).
+%! for ch = {"linear", "equal"}
+%!   n = vn_network ("invented filler buffer, valve shut");
+%!   n = vn_tank (n, "SB1", "shape", "sphere", "diameter", 1.8, "level", 0.9);
+%!   n = vn_feed (n, "F1", "SB1", "flow", 0.004);
+%!   n = vn_orifice (n, "O9", "SB1", "", "coeff", 0.004 / sqrt (0.8));
+%!   n = vn_valve (n, "LV2", "SB1", "", "kv", 30, "opening", 0, "characteristic", ch{1});
+%!   op = vn_steady (n, "tol", 1e-14);
+%!   assert (op.SB1.level, 0.8, 1e-9);
+%!   lin = vn_linearize (n, op, {"LV2.opening"}, {"SB1.level", "LV2.flow"});
+%!   fp = 1;
+%!   if (strcmp (ch{1}, "equal"))
+%!     fp = 50^-0.98 / 0.02;
+%!   endif
+%!   dq = 30 * fp / 3600 * sqrt (999.1 * g * 0.8 / 1e5);
+%!   assert (lin.B, -dq, 1e-9 * dq);
+%!   assert (lin.D(2), dq, 1e-9 * dq);
+%!   h = 1e-7;
+%!   o1 = vn_steady (n, "LV2.opening", h, "initial", op, "tol", 1e-14);
+%!   G = [(o1.SB1.level - op.SB1.level), (o1.LV2.flow - op.LV2.flow)].' / h;
+%!   assert (lin.gain, G, 1e-5 * abs (G));
+%!   assert (! isempty (strfind (lin.note, "LV2.opening")));
+%! endfor
+
+## --------------------------------------------------------------- item 10
+
+%!test
+%! ## "has no outlet" names the tank that fills: the line built without
+%! ## its filler valve fills the sphere, not the tank the feed enters
+%! n = vn_network ("invented juice line, no filler valve");
+%! n = vn_tank (n, "BT1", "area", 3, "base", 8, "level", 1.2);
+%! n = vn_tank (n, "HP1", "area", 2, "base", 2, "level", 1.2);
+%! n = vn_tank (n, "SB1", "area", 2.5, "level", 0.9);
+%! n = vn_feed (n, "F1", "BT1", "flow", 0.010);
+%! n = vn_valve (n, "FV1", "BT1", "HP1", "kv", 100, "opening", 0.5, "inlet", 1.9);
+%! n = vn_orifice (n, "O1", "HP1", "SB1", "coeff", 0.008, "inlet", 1.7);
+%! try
+%!   vn_steady (n);
+%!   error ("no refusal");
+%! catch err
+%!   assert (err.identifier, "vesselnet:no-steady-state");
+%!   assert (regexp (err.message, '^vn_steady: tank "SB1" has no outlet', "once"));
+%! end_try_catch
+
+%!test
+%! ## "allowed:" lists name real options, no internal placeholders, and
+%! ## the species of the network where it has some
+%! net = juice_line (false);
+%! ns = vn_network ("invented juice line with sugar", "species", {"brix"});
+%! ns = vn_tank (ns, "RT1", "area", 2);
+%! cases = {@() vn_tank (net, "T9", "colour", 1), "shape, area", "", ...
+%!          @() vn_feed (net, "F9", "RT1", "colour", 1), "flow", "", ...
+%!          @() vn_tank (ns, "T9", "colour", 1), "shape, area", "brix", ...
+%!          @() vn_feed (ns, "F9", "RT1", "colour", 1), "flow", "brix", ...
+%!          @() vn_simulate (net, [0 1], [], "colour", 1), "dt", "", ...
+%!          @() vn_linearize (net, [], "F1.flow", "RT1.level", "colour", 1), "loop", ""};
+%! for c = 1:3:numel (cases)
+%!   try
+%!     cases{c} ();
+%!     error ("no refusal");
+%!   catch err
+%!     assert (regexp (err.message, '^vn_\w+: .*"colour".*allowed: \w', "once"), 1);
+%!     lst = err.message(strfind (err.message, "allowed:"):end);
+%!     assert (! isempty (strfind (lst, cases{c+1})));
+%!     assert (isempty (regexp (lst, '\<(c[1-8]|species[1-8])\>', "once")), lst);
+%!     if (! isempty (cases{c+2}))
+%!       assert (! isempty (strfind (lst, cases{c+2})), lst);
+%!     endif
+%!   end_try_catch
+%! endfor
+
+%!test
+%! ## a missed target names its quantity; a step that leaves the input's
+%! ## range is refused by vn_stepresponse under its own name
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! try
+%!   vn_steady (net, "target", {"HP1.level", 1.99}, "adjust", {"FV1.opening"});
+%!   error ("no refusal");
+%! catch err
+%!   assert (err.identifier, "vesselnet:no-steady-state");
+%!   assert (regexp (err.message, '^vn_steady: .*HP1\.level', "once"), 1);
+%! end_try_catch
+%! for c = {{"FV1.opening", 0.7}, {"P1.speed", -0.8}}
+%!   try
+%!     vn_stepresponse (net, op, c{1}{:}, {"BT1.level"});
+%!     error ("no refusal");
+%!   catch err
+%!     assert (err.identifier, "Octave:invalid-input-arg");
+%!     uv = strsplit (c{1}{1}, ".");
+%!     assert (regexp (err.message, ['^vn_stepresponse: \w+ "' uv{1} '": ' uv{2} ' .*outside'], "once"), 1);
+%!   end_try_catch
+%! endfor
+
+%!test
+%! ## ranges refused at declaration, by the command that declares them,
+%! ## naming the unit, the field and the value
+%! net = juice_line (false);
+%! bad = {@() vn_network ("x", "smooth", -1), "vn_network", "SMOOTH", "-1";
+%!        @() vn_network ("x", "smooth", 0.5), "vn_network", "SMOOTH", "0.5";
+%!        @() vn_tank (net, "T9", "area", -2), "vn_tank", "AREA", "-2";
+%!        @() vn_tank (net, "T9", "area", 2, "level", 2e5), "vn_tank", "LEVEL", "200000";
+%!        @() vn_resistance (net, "R9", "CT1", "", "r", 0), "vn_resistance", "R", "0";
+%!        @() vn_controller (net, "XC1", "measure", "BT1.level", "manipulate", "FV1.opening", "setpoint", 1, "gain", 1, "reset", -5), "vn_controller", "RESET", "-5";
+%!        @() vn_switch (net, "LS9", "measure", "CT1.level", "manipulate", "FV1.opening", "on", 1, "off", 1), "vn_switch", "ON", "1";
+%!        @() vn_switch (net, "LS9", "measure", "CT1.level", "manipulate", "FV1.opening", "on", 1e13, "off", 1), "vn_switch", "ON", "1e\\+13";
+%!        @() vn_controller (net, "XC1", "measure", "F1.flow", "manipulate", "F1.flow", "setpoint", 0.01, "gain", 1), "vn_controller", "MEASURE", "F1.flow"};
+%! for i = 1:rows (bad)
+%!   try
+%!     bad{i,1} ();
+%!     error ("no refusal for row %d", i);
+%!   catch err
+%!     assert (err.identifier, "Octave:invalid-input-arg");
+%!     assert (regexp (err.message, ['^' bad{i,2} ': \w+ "\w+": .*' bad{i,3} '.*' bad{i,4}], "once"), 1, err.message);
+%!   end_try_catch
+%! endfor
+
+## --------------------------------------------------------------- item 11
+
+%!test
+%! ## vn_show: each controller's action once, limits as [lo hi], gains with
+%! ## their units (output per measured unit: 1/m for an opening on a level)
+%! s = evalc ("vn_show (juice_line (true))");
+%! lines = strsplit (s, "\n");
+%! for name = {"LC1", "LC2"}
+%!   l = lines{find (strncmp (strtrim (lines), [name{1} " "], 4), 1)};
+%!   assert (numel (strfind (l, "action")), 1, l);
+%!   assert (isempty (regexp (l, '\<(lo|hi) ', "once")), l);
+%!   assert (! isempty (regexp (l, 'gain [0-9.]+ 1/m', "once")), l);
+%! endfor
+%! assert (! isempty (regexp (s, 'LC1 .*limits \[0 1\.1\]', "once")));
+%! assert (! isempty (regexp (s, 'LC2 .*limits \[0 1\]', "once")));
