@@ -22,7 +22,9 @@
  * vessel the level continues linearly so level(V) stays invertible:
  * below empty with the vessel's largest plan area, so a volume within
  * the integrator's tolerance (scaled by that area) is a level within
- * its level tolerance. */
+ * its level tolerance; above the top of a sphere or lying cylinder with
+ * the slope its top band ends with, so level(V), and the spill at the
+ * default rim there, stay C1 where a full vessel rests. */
 #include <math.h>
 #include "vn_internal.h"
 
@@ -137,7 +139,16 @@ static double area_below (const vn_unit *u)
 
 static double area_above (const vn_unit *u, int shape)
 {
-  return shape == CONE ? u->d[D_AMAX] : 0.01 * u->d[D_AMAX];
+  /* a cone's top is its widest section; a sphere's or lying cylinder's
+   * top band ends with the slope a of band_coef, and the continuation
+   * keeps it, so level(V) stays C1 through the top (a kink there, where a
+   * full vessel spills at its default rim, made the integrator fail its
+   * error test at the smallest step) */
+  double a, b;
+  if (shape == CONE)
+    return u->d[D_AMAX];
+  band_coef (u, &a, &b);
+  return 1 / a;
 }
 
 /* Level and dlevel/dV from the volume. */

@@ -93,8 +93,10 @@
 %!      top = Inf;
 %!    case "horizontal"
 %!      ## a long drum: the core allows lengths up to 1e5 m, so a wide,
-%!      ## shallow reservoir gets a larger diameter instead
-%!      D = max (H, A / 1e5);
+%!      ## shallow reservoir gets a larger diameter instead (with a margin:
+%!      ## A / (A / 1e5) rounds to just above 1e5, seed 400xxx of a 1000-case
+%!      ## run)
+%!      D = max (H, A / 0.99e5);
 %!      opts = {"shape", "horizontal", "diameter", D, "length", max(A / D, 1e-3 * D)};
 %!      H = D;
 %!      top = H;
@@ -692,27 +694,55 @@
 %!   du = input_step (c, in, u0, 1e-3);
 %!   ## The nonlinear response is a difference of two runs' contents, so
 %!   ## its error is the integrator's tolerance, and a 0.1 % step on a
-%!   ## sight tube moves a level by 1e-7 .. 1e-5 m.  Two causes, found on
-%!   ## seeds 300007 300010 300021 300033 300039:
+%!   ## sight tube moves a level by 1e-7 .. 1e-5 m.  Causes found on
+%!   ## seeds 300007 300010 300021 300033 300039 (50 cases) and 300413
+%!   ## 300567 300599 300715 300770 300851 300990 (1000 cases):
 %!   ## - product: vn_stepresponse held every state to one absolute
 %!   ##   tolerance of 1e-10 (a 1e-7 m3 tank's heat content to 5e-5 of
 %!   ##   itself: T1.temperature off by 0.00104 on a response of 0.000856;
 %!   ##   with tight tolerances the linearisation agrees to 0.3 %); it now
 %!   ##   uses the capacity-scaled tolerance per state (fixed 11 of 12);
-%!   ## - test design: that tolerance is 1e-8 m over a vessel's largest
-%!   ##   plan area, so in a cone at a tenth of its height it is 1e-6 m of
-%!   ##   level, 2 % of a 0.1 % step's response (300033).  The step must
-%!   ##   stand well above the tolerance used, so the test asks for one
-%!   ##   1e-4 of that (1e-12 m over the case's area scale) and reltol
-%!   ##   1e-10.
-%!   p4tol = {"reltol", 1e-10, "abstol", 1e-12 * c.A};
+%!   ## - test design, tolerance: that tolerance is 1e-8 m over a vessel's
+%!   ##   largest plan area, so in a cone at a tenth of its height, or a
+%!   ##   sphere at 1 mm, it is 1e-6 m of level or more, several % of a
+%!   ##   small step's response (300033, 300990).  The response must stand
+%!   ##   well above the tolerance used: the test asks for 1e-10 of the
+%!   ##   smallest content at the operating point (not below 1e-18, the
+%!   ##   least vn_simulate takes), and reltol 1e-10;
+%!   ## - test design, step: "small" is small in the outputs, not the
+%!   ##   input: 0.1 % of a feed moved a tiny drum's level by 50 % and a
+%!   ##   quick-opening valve's flow by 6 % (300851, 300413), where the
+%!   ##   second-order terms are that fraction of the response (the error
+%!   ##   scales with the step).  The step is cut until no linear output
+%!   ##   moves more than 1e-3 of its operating size;
+%!   ## - test design, dry tanks: a tank empty at the operating point has
+%!   ##   no temperature or concentration (M / V at V = 0, held), so those
+%!   ##   outputs are not compared (300567), as in P5.
+%!   vols = cellfun (@(t) op.(t).volume, c.tanks);
+%!   vmin = min ([vols(vols > 0), 1]);
+%!   atol = max (1e-10 * vmin, 1e-18);
+%!   p4tol = {"reltol", 1e-10, "abstol", atol};
+%!   ys = zeros (1, numel (c.outputs));
+%!   cmp = true (1, numel (c.outputs));
+%!   for i = 1:numel (c.outputs)
+%!     y0 = op_value (op, c.outputs{i});
+%!     ys(i) = max ([abs(y0), c.H * endswith(c.outputs{i}, ".level"), c.Q * endswith(c.outputs{i}, ".flow"), 1e-12]);
+%!     t = c.outputs{i}(1:find (c.outputs{i} == ".", 1) - 1);
+%!     cmp(i) = ! (any (strcmp (t, c.tanks)) && op.(t).volume <= 0
+%!                 && ! any (endswith (c.outputs{i}, {".level", ".volume"})));
+%!   endfor
 %!   try
 %!     sr = vn_stepresponse (c.net, op, in, du, c.outputs, p4tol{:});
+%!     rel = max (max (abs (sr.linear), [], 1) ./ ys);
+%!     if (rel > 1e-3)
+%!       du *= 1e-3 / rel;
+%!       sr = vn_stepresponse (c.net, op, in, du, c.outputs, p4tol{:});
+%!     endif
 %!   catch err
 %!     fails = add_fail (fails, c, "P4 stepresponse", err.message);
 %!     continue;
 %!   end_try_catch
-%!   for i = 1:numel (c.outputs)
+%!   for i = find (cmp)
 %!     nprop++;
 %!     ynl = sr.nonlinear(:,i);
 %!     yl = sr.linear(:,i);
