@@ -142,6 +142,29 @@
 %! assert (lin.gain(4, 3), 1, 1e-9);
 
 %!test
+%! ## A transfer function is built on the states the input reaches and
+%! ## that reach the output only: F1 -> BT1.level has RT1 and BT1 (2
+%! ## poles, not 7: the idle CT1, the sight tube and the reservoir add no
+%! ## common factor), FV1 -> SB1.level has RT1, BT1, HP1, SB1 (4 poles);
+%! ## each equals C (sI - A)^-1 B + D of the full model (complex solve)
+%! net = juice_line (false);
+%! op = vn_steady (net);
+%! for c = {{"F1.flow", "BT1.level", 2}, {"FV1.opening", "SB1.level", 4}}
+%!   lin = vn_linearize (net, op, c{1}{1}, c{1}{2});
+%!   assert (numel (lin.den) - 1, c{1}{3});
+%!   A = full (lin.A);
+%!   for s = [1e-5i, 1e-3i, 1e-2, 0.1i, 1 + 1i]
+%!     h = lin.C * ((s * eye (rows (A)) - A) \ lin.B) + lin.D;
+%!     assert (polyval (lin.num, s) / polyval (lin.den, s), h, 1e-8 * abs (h) + 1e-12);
+%!   endfor
+%!   ## its poles are eigenvalues of A
+%!   ev = eig (A);
+%!   for p = roots (lin.den).'
+%!     assert (min (abs (ev - p)), 0, 1e-6 * abs (p));
+%!   endfor
+%! endfor
+
+%!test
 %! ## A truly integrating pair reports a signed Inf.  CIP tank KT1 is
 %! ## emptied by a fixed-flow pump, so its level ignores its own outflow:
 %! ## +Inf for its feed, -Inf for the pump's speed.  KT2 behind the pump
