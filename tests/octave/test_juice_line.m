@@ -392,6 +392,21 @@
 %! assert (min (res.RT1.level) >= -1e-6);
 %! assert (res.RT1.level(end) < 0.01);
 
+%!test
+%! ## A run that runs out of steps says where and what would help, and
+%! ## doing what it says completes the run (the advice helps)
+%! net = juice_line (false);
+%! try
+%!   vn_simulate (net, [0 1e5], "dt", 1e5, "maxsteps", 20);
+%!   error ("no failure");
+%! catch err
+%!   assert (err.identifier, "vesselnet:solver-failure");
+%!   assert (regexp (err.message, '^vn_simulate: .*stopped at t = .*tank "\w+".*raise maxsteps', "once"), 1, err.message);
+%! end_try_catch
+%! res = vn_simulate (net, [0 1e5], "dt", 1e5, "maxsteps", 2000);
+%! assert (res.t(end), 1e5);
+%! assert (res.stats.steps < 2000);
+
 ## ---------------------------------------------------------------- item 3
 
 %!test
