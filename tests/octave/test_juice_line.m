@@ -229,7 +229,7 @@
 %! ## a small step of the feed gives linear and nonlinear responses that
 %! ## agree to 2 % of the change.
 %! rand ("state", 8);
-%! ncase = 20;  nok = 0;
+%! ncase = 14;  nok = 0;
 %! for c = 1:ncase
 %!   r = rand (1, 8);
 %!   n = vn_network ("invented juice line variant");
