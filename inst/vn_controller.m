@@ -28,7 +28,11 @@
 ## holds a level) or @qcode{"direct"} (the output rises with the
 ## measurement, as for a valve on an outlet that holds a level).
 ## @item @qcode{"limits"}
-## [lo hi] output limits (default none; give [0 1] for a valve).
+## [lo hi] output limits (default none; give [0 1] for a valve).  The
+## output is also held within the driven input's range (a valve opening
+## or pump speed within its travel), so limits [0 1.1] on an opening act
+## at 1, anti-windup included, and the output reported is what the
+## element receives.  Limits that leave nothing of that range are refused.
 ## @item @qcode{"bias"}
 ## output at zero error; default the driven input's declared value.
 ## @item @qcode{"filter"}
@@ -40,9 +44,18 @@
 ## derivative filter as a fraction of Td (default 0.1).
 ## @end table
 ##
-## In a cascade, declare the outer (master) controller before the inner
-## one whose setpoint it drives: the inner controller reads that setpoint
-## within the same evaluation.
+## Cascade: declare the inner (slave) controller first, then the outer
+## (master) one with @qcode{"manipulate"} naming the inner one's
+## @qcode{"setpoint"}.  Within each evaluation the outer controller acts
+## first, so the inner one reads the setpoint it is given at that instant;
+## up to seven levels may be chained, and a chain that comes back to its
+## own setpoint is refused.  A switch may drive a setpoint in the same way.
+##
+## At the start of a run a controller's transmitter filter reads the plant
+## as declared, with every controller output at its bias (by default the
+## driven input's declared value); a network declared at equilibrium
+## stays there, and one declared off its setpoint sees the controller act
+## on the error from the first instant.
 ##
 ## The controller's output is reported as @code{res.NAME.output}, with
 ## @code{res.NAME.measurement} and @code{res.NAME.error}.  Settings must be
@@ -94,6 +107,16 @@ function net = vn_controller (net, name, varargin)
              "%s: controller \"%s\": LIMITS must be [lo hi] with lo < hi, got %s",
              fn, name, build_value_str (L));
     endif
+    ## the output also stays within the driven input's own range (a valve
+    ## opening within [0, 1]); limits must leave something of it
+    [rlo, rhi, ru] = loop_input_range (net, o.manipulate,
+                                       sprintf ("%s: controller \"%s\"", fn, name));
+    if (! (max (L(1), rlo) < min (L(2), rhi)))
+      error ("Octave:invalid-input-arg",
+             "%s: controller \"%s\": LIMITS %s leave nothing of the range of %s, [%s %s] (%s)",
+             fn, name, mat2str (L(:).', 6), o.manipulate, build_value_str (rlo),
+             build_value_str (rhi), ru);
+    endif
     par.lo = L(1);
     par.hi = L(2);
   endif
@@ -138,3 +161,52 @@ endfunction
 %!error <ANTIWINDUP must be true or false> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "antiwindup", "yes")
 %!error <LIMITS> vn_controller (net, "LC2", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1, "limits", [1 0])
 %!error <vn_controller: controller "events": NAME "events" is reserved> vn_controller (net, "events", "measure", "T1.level", "manipulate", "F1.flow", "setpoint", 1, "gain", 1)
+
+## A cascade: the outer level loop sets the inner flow loop's setpoint.
+%!test
+%! net = vn_tank (vn_network ("c"), "T1", "area", 2, "level", 1.2);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.01);
+%! net = vn_pump (net, "P1", "T1", "", "flow", 0.02, "speed", 0.5);
+%! net = vn_controller (net, "FC1", "measure", "P1.flow", "manipulate", "P1.speed", ...
+%!                      "setpoint", 0.01, "gain", 40, "reset", 5, "limits", [0 1.5]);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "FC1.setpoint", ...
+%!                      "setpoint", 1, "gain", 0.02, "reset", 300, "action", "direct");
+%! res = vn_simulate (net, [0 1], "dt", 1);
+%! ## outer output at t = 0: bias 0.01 + 0.02 (1.2 - 1) = 0.014 m3/s
+%! assert (res.LC1.output(1), 0.014, 1e-12);
+%! assert (res.FC1.output(1), 0.5 + 40 * (0.014 - 0.01), 1e-10);
+
+## Limits wider than the driven input's range act at the input's end stop:
+## limits [0 1.1] on a valve opening behave exactly as [0 1] (anti-windup
+## at the real stop), and the reported output is what the valve receives.
+%!test
+%! function res = run (limits)
+%!   net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%!   net = vn_feed (net, "F1", "T1", "flow", 0.05);
+%!   net = vn_valve (net, "LV1", "T1", "", "kv", 300, "opening", 0.5);
+%!   net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                        "setpoint", 1, "gain", 2, "reset", 100, "action", "direct", "limits", limits);
+%!   u = vn_signal ("F1.flow", "table", [0 0.05; 300 0.05; 301 0.3; 600 0.3; 601 0.02]);
+%!   res = vn_simulate (net, [0 1500], u, "dt", 10);
+%! endfunction
+%! wide = run ([0 1.1]);
+%! tight = run ([0 1]);
+%! assert (max (wide.LC1.output), 1);
+%! assert (any (wide.LC1.output == 1));
+%! assert (wide.LC1.output, wide.LV1.opening, 0);
+%! assert (wide.T1.level, tight.T1.level, 1e-6);
+%! assert (wide.LC1.output, tight.LC1.output, 1e-6);
+%!error <vn_controller: controller "LC1": LIMITS \[1.2 2\] leave nothing of the range of LV1.opening, \[0 1\] \(1\)> ...
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                      "setpoint", 1, "gain", 2, "limits", [1.2 2]);
+## the core refuses the same of a network edited by hand
+%!error <controller "LC1": limits \[1.2 2\] leave nothing of the range of LV1.opening, \[0 1\]> ...
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                      "setpoint", 1, "gain", 2, "limits", [0 1]);
+%! net.units(net.index.LC1).par.lo = 1.2;
+%! net.units(net.index.LC1).par.hi = 2;
+%! vn_simulate (net, [0 1]);

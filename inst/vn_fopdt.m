@@ -113,7 +113,14 @@ function m = vn_fopdt (t, u, y, varargin)
     seedtype = "fopdt";
   endif
   p0 = fopdt_seed (seedtype, cand, ev, tt, yy);
-  [p, info] = fopdt_lm (@(p) resid (seedtype, p, ev, tt, yy), p0, maxiter);
+  ## the dead time (last, as a log) stops at 1e-9 of the sampling
+  ## interval, far below the 1e-3 under which it is reported as 0
+  ## (pack_model) and too small to bias the others, so "none" converges
+  lodt = @(p0) [-Inf(numel (p0) - 1, 1); log(1e-9 * dtmin)];
+  ## residuals within 1e-9 of the output's range: an exact fit (noise-free
+  ## data), where the cost only wanders at rounding level
+  rfloor = 1e-9 * (max (yy) - min (yy));
+  [p, info] = fopdt_lm (@(p) resid (seedtype, p, ev, tt, yy), p0, maxiter, lodt (p0), rfloor);
 
   if (strcmp (type, "sopdt"))
     ## Start from the first-order fit split by the half rule, which maps a
@@ -124,7 +131,7 @@ function m = vn_fopdt (t, u, y, varargin)
     tau2 = f * tau;
     cand = [tau - tau2 / 2, tau2, max(theta - tau2 / 2, 1e-3 * theta + 1e-4 * span)];
     p0 = fopdt_seed ("sopdt", cand, ev, tt, yy);
-    [p, info] = fopdt_lm (@(p) resid ("sopdt", p, ev, tt, yy), p0, maxiter);
+    [p, info] = fopdt_lm (@(p) resid ("sopdt", p, ev, tt, yy), p0, maxiter, lodt (p0), rfloor);
   endif
 
   if (! info.converged)
@@ -362,6 +369,7 @@ endfunction
 %! assert (isfinite (m0.stderr.tau));
 %! mi = vn_fopdt (tn, un, 3 + 2e-3 * max (tn - 60, 0), "integrating");
 %! assert (mi.deadtime, 0);
+%! assert (mi.converged);
 %! assert (mi.gain, 2e-3, -1e-8);
 %! fail ("vn_tune (m0, \"simc\")", "\"tauc\"");
 

@@ -12,7 +12,9 @@
 ## @code{res.events} (time, unit, new value); the output is
 ## @code{res.NAME.output}.
 ##
-## Option @qcode{"values"}: [off-value on-value], default [0 1].
+## Option @qcode{"values"}: [off-value on-value], default [0 1]; both
+## within the range of the driven input (a valve opening or pump speed
+## within its travel).
 ##
 ## A modelled switch is not a safety device: overfill and dry-run
 ## protection are designed under local codes and licensed practice.
@@ -46,6 +48,14 @@ function net = vn_switch (net, name, varargin)
              "%s: switch \"%s\": VALUES must be [off-value on-value], two finite numbers, got %s",
              fn, name, build_value_str (v));
     endif
+    [lo, hi, ru] = loop_input_range (net, o.manipulate,
+                                     sprintf ("%s: switch \"%s\"", fn, name));
+    if (any (v < lo | v > hi))
+      error ("Octave:invalid-input-arg",
+             "%s: switch \"%s\": VALUES must lie in the range of %s, [%s %s] (%s), got %s",
+             fn, name, o.manipulate, build_value_str (lo), build_value_str (hi),
+             ru, mat2str (v(:).', 6));
+    endif
     par.offvalue = v(1);
     par.onvalue = v(2);
   endif
@@ -71,3 +81,8 @@ endfunction
 %! assert (period, 2 * 1 / 0.004 + 2 * 1 / (0.01 - 0.004), 1e-2);
 %!error <equal> vn_switch (vn_network ("s"), "LS1", "measure", "a.b", "manipulate", "c.d", "on", 1, "off", 1)
 %!error <ON is required> vn_switch (vn_network ("s"), "LS1", "measure", "a.b", "manipulate", "c.d", "off", 1)
+
+%!error <vn_switch: switch "LS1": VALUES must lie in the range of LV1.opening, \[0 1\] \(1\), got \[0 1.5\]> ...
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30);
+%! vn_switch (net, "LS1", "measure", "T1.level", "manipulate", "LV1.opening", "on", 2, "off", 1, "values", [0 1.5]);

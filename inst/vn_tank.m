@@ -242,7 +242,8 @@ function check_levels (fn, label, par, top, table)
   endif
   f = {"rim", "level"};
   for i = 1:2
-    if (isfield (par, f{i}) && isfinite (par.(f{i})) && par.(f{i}) > top)
+    ## a rim of Inf on a closed vessel too: a closed vessel spills at its top
+    if (isfield (par, f{i}) && par.(f{i}) > top)
       build_error (fn, label, ["%s must not exceed the top of the vessel ", ...
                                "(%s m), got %s"], upper (f{i}),
                    build_value_str (top), build_value_str (par.(f{i})));
@@ -364,6 +365,9 @@ endfunction
 %!error <vn_tank: tank "T1": SPILL names the tank itself> vn_tank (vn_network (), "T1", "area", 1, "rim", 2, "spill", "T1")
 %!error <vn_tank: tank "T1": SPILL "T0" given but the tank has no finite RIM> vn_tank (vn_tank (vn_network (), "T0", "area", 1), "T1", "area", 1, "spill", "T0")
 %!error <vn_tank: tank "TT": RIM must lie in \(0, 2\] \(m\), the top of the strapping table: a table tank spills over its top, got Inf> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "rim", Inf)
+%!error <vn_tank: tank "C2": RIM must not exceed the top of the vessel \(1.6 m\), got Inf> vn_tank (vn_network (), "C2", "shape", "sphere", "diameter", 1.6, "rim", Inf)
+%!error <vn_tank: tank "C3": RIM must not exceed the top of the vessel \(2 m\), got Inf> vn_tank (vn_network (), "C3", "shape", "cone", "diameter", 1, "height", 2, "rim", Inf)
+%!error <vn_tank: tank "H1": RIM must not exceed the top of the vessel \(1.2 m\), got Inf> vn_tank (vn_network (), "H1", "shape", "horizontal", "diameter", 1.2, "length", 3, "rim", Inf)
 %!error <vn_tank: tank "TT": RIM must not exceed the top of the vessel \(2 m\), got 2.5> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "rim", 2.5)
 %!error <vn_tank: tank "TT": LEVEL must not exceed the top of the vessel \(2 m\), got 2.1> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "level", 2.1)
 %!error <vn_tank: tank "TT": VOLUME must not exceed the top of the strapping table \(5 m3\), got 5.5> vn_tank (vn_network (), "TT", "table", [0 0; 1 2; 2 5], "volume", 5.5)

@@ -1,14 +1,28 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {[@var{p}, @var{info}] =} fopdt_lm (@var{fun}, @var{p0}, @var{maxiter})
+## @deftypefnx {} {[@var{p}, @var{info}] =} fopdt_lm (@var{fun}, @var{p0}, @var{maxiter}, @var{plo}, @var{rfloor})
 ## Minimise the sum of squares of the residual vector @code{fun (p)} by
 ## Levenberg-Marquardt steps with Marquardt's diagonal scaling and a
-## central-difference Jacobian.  @var{info} has fields J (Jacobian of the
-## residuals at @var{p}), ssr, iterations and converged.
+## central-difference Jacobian.  @var{plo} (default -Inf) are lower
+## bounds: a parameter that reaches its bound while the cost still falls
+## beyond it stays there and the others go on, so a dead time of none
+## (its log falling without end) converges instead of using up the
+## iterations.  A root-mean-square residual at or below @var{rfloor}
+## (default 0) is an exact fit and ends the search.  @var{info} has fields J (Jacobian of the residuals at
+## @var{p}), ssr, iterations and converged.
 ## @end deftypefn
 
-function [p, info] = fopdt_lm (fun, p0, maxiter)
+function [p, info] = fopdt_lm (fun, p0, maxiter, plo, rfloor)
 
   p = p0(:);
+  if (nargin < 4 || isempty (plo))
+    plo = -Inf (size (p));
+  endif
+  if (nargin < 5)
+    rfloor = 0;
+  endif
+  plo = plo(:);
+  p = max (p, plo);
   r = fun (p);
   ssr = r' * r;
   mu = 1e-3;
@@ -27,10 +41,14 @@ function [p, info] = fopdt_lm (fun, p0, maxiter)
     ## Floor the scaling so a column that has gone flat stays solvable.
     d = diag (A);
     d = max (d, 1e-12 * max ([d; realmin]));
+    ## held: at its bound with the descent pointing below it
+    free = ! (p <= plo & g > 0);
     accepted = false;
     while (mu < 1e12)
-      dp = -(A + mu * diag (d)) \ g;
-      pn = p + dp;
+      dp = zeros (size (p));
+      dp(free) = -(A(free,free) + mu * diag (d(free))) \ g(free);
+      pn = max (p + dp, plo);
+      dp = pn - p;
       rn = fun (pn);
       ssrn = rn' * rn;
       if (isfinite (ssrn) && ssrn < ssr)
@@ -50,7 +68,8 @@ function [p, info] = fopdt_lm (fun, p0, maxiter)
     p = pn;
     r = rn;
     ssr = ssrn;
-    converged = small_step || small_gain;
+    exact = ssr <= numel (r) * rfloor^2;
+    converged = small_step || small_gain || exact;
   endwhile
 
   info.J = jacobian (fun, p);

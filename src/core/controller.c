@@ -50,6 +50,12 @@ static int check (vn_net *net, vn_unit *u)
   if (!(lo < hi))
     return vn_fail_unit (net, u, "limits must satisfy lo < hi, got [%g %g]",
                          lo, hi);
+  const vn_unit *cu = &net->u[u->ref[2]];
+  const vn_param_info *ci = &cu->k->par[u->ref[3]];
+  if (!(fmax (lo, ci->lo) < fmin (hi, ci->hi)))
+    return vn_fail_unit (net, u, "limits [%g %g] leave nothing of the "
+                         "range of %s.%s, [%g %g] (%s)", lo, hi, cu->name,
+                         ci->name, ci->lo, ci->hi, ci->unit);
   const vn_unit *mu = &net->u[u->ref[0]];
   double tf = vn_par (net, u, FILTER);
   if (!vn_given (net, u, FILTER))
@@ -131,6 +137,13 @@ static double measurement (vn_net *net, vn_unit *u, const double *x,
 
 static void pre (vn_net *net, vn_unit *u, const double *x)
 {
+  if (net->hold_loops)
+    {
+      u->q = u->d[D_BIAS];
+      u->dq.n = 0;
+      net->p[net->u[u->ref[2]].poff + u->ref[3]] = u->q;
+      return;
+    }
   int xi, xf, xz;
   layout (u, &xi, &xf, &xz);
   double s = net->p[u->poff + ACTION] ? 1 : -1;
@@ -175,7 +188,12 @@ static void pre (vn_net *net, vn_unit *u, const double *x)
     if (vn_given (net, u, BIAS))
       vn_lf_p (&du, vn_pcol (u, BIAS), 1);
   }
-  double lo = net->p[u->poff + LO], hi = net->p[u->poff + HI];
+  /* the output stays within the driven input's range as well as the
+   * limits (a valve cannot open past 1), so what is reported is what
+   * the element receives and anti-windup acts at the real end stop */
+  const vn_param_info *ci = &net->u[u->ref[2]].k->par[u->ref[3]];
+  double lo = fmax (net->p[u->poff + LO], ci->lo);
+  double hi = fmin (net->p[u->poff + HI], ci->hi);
   double uu = ur < lo ? lo : ur > hi ? hi : ur;
   vn_lf_scale (&du, (ur < lo || ur > hi) ? 0.0 : 1.0);
   u->d[D_URAW] = ur;

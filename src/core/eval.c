@@ -121,10 +121,13 @@ int vn_eval (vn_net *net, double t, const double *x, double *f, double *y,
       if (u->k->role == VN_ROLE_NODE)
         u->k->node (net, u, x, &net->nd[i]);
     }
-  /* controllers and switches set the inputs they drive */
-  for (int i = 0; i < net->nu && net->nloop; i++)
-    if (net->u[i].k->pre)
-      net->u[i].k->pre (net, &net->u[i], x);
+  /* controllers and switches set the inputs they drive, the outer one
+   * of a cascade first */
+  for (int k = 0; k < net->nloop; k++)
+    {
+      vn_unit *u = &net->u[net->loop_order[k]];
+      u->k->pre (net, u, x);
+    }
   /* own dynamics and element flows; controllers' own states last, once
    * the flows they may measure are known */
   for (int pass = 0; pass < 1 + (net->nloop > 0); pass++)

@@ -41,12 +41,6 @@ int vn_check_loop_refs (vn_net *net, vn_unit *u)
                          "heater duty or controller setpoint)");
   if (cu == self)
     return vn_fail_unit (net, u, "it cannot manipulate its own setpoint");
-  /* a cascade's inner (slave) controller reads the setpoint the outer
-   * one writes, so the outer must act first: declared first */
-  if (net->u[cu].k->pre && cu < self)
-    return vn_fail_unit (net, u, "it drives the setpoint of \"%s\", "
-                         "declared before it; declare the outer (master) "
-                         "controller first", net->u[cu].name);
   int pidx = net->u[cu].poff + cp;
   if (!net->override)
     {
@@ -62,5 +56,66 @@ int vn_check_loop_refs (vn_net *net, vn_unit *u)
                          net->u[cu].name, net->u[cu].k->par[cp].name,
                          net->u[net->override[pidx]].name);
   net->override[pidx] = self;
+  return VN_OK;
+}
+
+/* Cascade depth of loop unit i: how many controllers or switches its
+ * output passes through (each driving the next one's setpoint) before it
+ * reaches the plant; -1 when the chain closes on itself. */
+static int cascade_depth (const vn_net *net, int i)
+{
+  int depth = 0;
+  for (int j = net->u[i].ref[2]; net->u[j].k->pre; j = net->u[j].ref[2])
+    if (++depth > net->nloop)
+      return -1;
+  return depth;
+}
+
+int vn_loop_order (vn_net *net)
+{
+  net->nloop = 0;
+  for (int i = 0; i < net->nu; i++)
+    net->nloop += net->u[i].k->pre != NULL;
+  free (net->loop_order);
+  net->loop_order = malloc ((size_t) (net->nloop + 1)
+                            * sizeof *net->loop_order);
+  int *depth = malloc ((size_t) (net->nu + 1) * sizeof *depth);
+  if (!net->loop_order || !depth)
+    {
+      free (depth);
+      return VN_ENOMEM;
+    }
+  int n = 0, maxd = 0;
+  for (int i = 0; i < net->nu; i++)
+    {
+      if (!net->u[i].k->pre)
+        continue;
+      depth[i] = cascade_depth (net, i);
+      if (depth[i] < 0)
+        {
+          free (depth);
+          return vn_fail_unit (net, &net->u[i], "its output comes back to "
+                               "its own setpoint through the controllers "
+                               "it drives; a cascade must end at a plant "
+                               "input");
+        }
+      if (depth[i] > maxd)
+        maxd = depth[i];
+      /* derivatives chain through at most 8 driven inputs (lf.c) */
+      if (depth[i] > 6)
+        {
+          int levels = depth[i] + 1;
+          free (depth);
+          return vn_fail_unit (net, &net->u[i], "it heads a cascade of %d "
+                               "controllers or switches; at most 7 are "
+                               "supported", levels);
+        }
+    }
+  /* deepest (outermost) first; declaration order within a depth */
+  for (int d = maxd; d >= 0; d--)
+    for (int i = 0; i < net->nu; i++)
+      if (net->u[i].k->pre && depth[i] == d)
+        net->loop_order[n++] = i;
+  free (depth);
   return VN_OK;
 }

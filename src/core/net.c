@@ -57,6 +57,7 @@ void vn_net_free (vn_net *net)
   free (net->rowind);
   free (net->map);
   free (net->override);
+  free (net->loop_order);
   free (net->fwork);
   free (net->ev);
   free (net);
@@ -255,8 +256,9 @@ static int setup_layout (vn_net *net)
     }
   net->nx = nx;
   net->ny = ny;
-  for (int i = 0; i < net->nu; i++)
-    net->nloop += net->u[i].k->pre != NULL;
+  int st = vn_loop_order (net);
+  if (st)
+    return st;
   net->nd = calloc ((size_t) (net->nu > 0 ? net->nu : 1), sizeof *net->nd);
   net->dy = calloc ((size_t) (ny ? ny : 1), sizeof *net->dy);
   net->y = calloc ((size_t) (ny ? ny : 1), sizeof *net->y);
@@ -438,16 +440,19 @@ int vn_initial_state (vn_net *net, double *x0)
         for (int j = 0; j < u->nx; j++)
           x0[u->xoff + j] = 0;
     }
-  /* controllers' filters start at their measurement; a measured flow
-   * depends on what the controller does, so settle a few times */
-  for (int pass = 0; pass < 3; pass++)
+  /* controllers' filters start at the measurement of the plant as
+   * declared, every controller output at its bias (the driven input's
+   * declared value unless a bias is given): what the transmitter shows
+   * before the loops act.  Iterating the measurement through the loop
+   * instead diverges when the loop gain exceeds 1. */
+  int any = 0;
+  for (int i = 0; i < net->nu; i++)
+    any |= net->u[i].k == &vn_kind_controller && net->u[i].nx > 0;
+  if (any)
     {
-      int any = 0;
-      for (int i = 0; i < net->nu; i++)
-        any |= net->u[i].k == &vn_kind_controller && net->u[i].nx > 0;
-      if (!any)
-        break;
+      net->hold_loops = 1;
       int st = vn_eval (net, 0, x0, NULL, NULL, 0, 0, 0, 0);
+      net->hold_loops = 0;
       if (st)
         return st;
       for (int i = 0; i < net->nu; i++)

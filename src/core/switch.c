@@ -30,6 +30,16 @@ static int check (vn_net *net, vn_unit *u)
     return vn_fail_unit (net, u, "on and off set points are equal (%g); "
                          "the dead band needs on != off",
                          vn_par (net, u, ON));
+  const vn_unit *cu = &net->u[u->ref[2]];
+  const vn_param_info *ci = &cu->k->par[u->ref[3]];
+  for (int j = OFFVALUE; j <= ONVALUE; j++)
+    {
+      double v = vn_par (net, u, j);
+      if (!(v >= ci->lo && v <= ci->hi))
+        return vn_fail_unit (net, u, "%s %g lies outside the range of "
+                             "%s.%s, [%g %g] (%s)", par[j].name, v,
+                             cu->name, ci->name, ci->lo, ci->hi, ci->unit);
+    }
   return VN_OK;
 }
 

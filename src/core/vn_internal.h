@@ -157,6 +157,8 @@ struct vn_net {
   vn_trip jx, jp, yx, yp;
   int want_d;       /* this evaluation wants derivatives */
   int nloop;        /* controllers and switches (units with a pre pass) */
+  int *loop_order;  /* those nloop units, each cascade's outer one first */
+  int hold_loops;   /* controllers output their bias (vn_initial_state) */
   double *fwork;    /* nx: balances when the caller wants outputs only */
   /* sparse pattern of df/dx */
   long nnz;
@@ -191,6 +193,9 @@ double vn_measure (vn_net *net, const vn_unit *u, const double *x,
 /* Check the measure/manipulate references and claim the manipulated
  * input (net->override) for unit u. */
 int vn_check_loop_refs (vn_net *net, vn_unit *u);
+/* Order the units with a pre pass so that a controller or switch that
+ * drives another's setpoint acts before it (net->loop_order). */
+int vn_loop_order (vn_net *net);
 void vn_controller_settle (vn_net *net, vn_unit *u, double *x);
 double vn_switch_root (vn_net *net, vn_unit *u, const double *x);
 void vn_switch_flip (vn_net *net, vn_unit *u);
