@@ -298,6 +298,9 @@ function blocks = rep_steady (op, net)
   if (isfield (op, "spilling") && ! isempty (op.spilling))
     blocks{end+1} = {"p", ["spilling: " strjoin(cellstr(op.spilling), ", ")]};
   endif
+  if (isfield (op, "saturated") && ! isempty (op.saturated))
+    blocks{end+1} = {"p", ["saturated, off setpoint: " strjoin(cellstr(op.saturated), ", ")]};
+  endif
 endfunction
 
 function v = get0 (r, f)
@@ -741,3 +744,14 @@ endfunction
 %! assert (! isempty (strfind (s, "direct action (vn_controller gets gain |Kc| = 1.5)")));
 %!error <Invalid call> vn_report ()
 %!error <cannot tell what result> vn_report (struct ("q", 1))
+
+## A saturated loop is named in the operating point's report.
+%!test
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.005);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30, "opening", 0.5);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                      "setpoint", 1, "gain", 2, "reset", 100, "action", "direct");
+%! warning ("off", "vesselnet:saturated", "local");
+%! s = vn_report (vn_steady (net));
+%! assert (! isempty (strfind (s, "saturated, off setpoint: LC1")));

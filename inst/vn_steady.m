@@ -64,6 +64,11 @@
 ## @item frozen
 ## names of the switches held by @qcode{"freeze"} (an empty cell
 ## otherwise).
+## @item saturated
+## names of the controllers whose output sits at a limit (their own
+## @qcode{"limits"} or the driven input's range, a valve fully open or
+## shut): such a loop cannot hold its setpoint at this operating point,
+## and a warning (id @qcode{"vesselnet:saturated"}) says so.
 ## @item net
 ## the network with the inputs set to their steady values, so that
 ## @code{vn_simulate (op.net, tspan, "initial", op)} continues from it.
@@ -143,6 +148,7 @@ function op = vn_steady (net, varargin)
   endif
   op.solver = info.solver;
   op.frozen = frozen;
+  op.saturated = saturated_loops (net, op);
   op.net = net;
   if (opt.verbose)
     printf ("vn_steady: %s, %d iterations, residual %.3g m3/s (scaled %.3g), %s\n",
@@ -321,6 +327,33 @@ function [net, names] = freeze_switches (net, freeze)
   net = vn_drop_units (net, sw);
 endfunction
 
+## Controllers whose output sits at a limit (its own or the driven
+## input's range): the loop cannot hold its setpoint there.  Warn once,
+## naming each, and return their names.
+function names = saturated_loops (net, op)
+  names = cell (0, 1);
+  for i = find (strcmp ({net.units.kind}, "controller"))
+    u = net.units(i);
+    [rlo, rhi] = loop_input_range (net, u.aux.manipulate, "vn_steady");
+    [lo, hi] = deal (rlo, rhi);
+    if (isfield (u.par, "lo"))
+      lo = max (lo, u.par.lo);
+    endif
+    if (isfield (u.par, "hi"))
+      hi = min (hi, u.par.hi);
+    endif
+    out = op.(u.name).output;
+    tol = 1e-9 * max (1, abs (out));
+    if (abs (out - hi) <= tol || abs (out - lo) <= tol)
+      names{end+1, 1} = u.name;
+      warning ("vesselnet:saturated",
+               "vn_steady: controller \"%s\" holds %s at its %s limit %.6g: %s settles at %.6g, setpoint %.6g; the loop cannot hold its setpoint at this operating point",
+               u.name, u.aux.manipulate, ifelse (abs (out - hi) <= tol, "upper", "lower"),
+               out, u.aux.measure, op.(u.name).measurement, op.(u.name).setpoint);
+    endif
+  endfor
+endfunction
+
 ## The result struct: unit fields as scalars, inputs, spilling tanks.
 function op = operating_point (net, x, y, states)
   ## one time point: every field of the result is already a scalar
@@ -454,6 +487,33 @@ endfunction
 %! assert (a.LV1.opening, 1);
 %! assert (a.inputs.LV1.opening, 1);
 %! assert (a.T1.level, b.T1.level, 1e-12);
+## An undersized outlet valve: fully open it passes the feed only at a
+## level of 3.67 m.  Valve law Q = Kv sqrt(dp / (rho / rho0)), Kv in m3/h
+## and dp in bar (IEC 60534-2-1, non-choked liquid), dp = rho g h, rho0 =
+## 999.1 kg/m3 (water at 15 degC, memory): h = (Q / Kv)^2 1e5 / (rho0 g).
+%!test
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.005);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30, "opening", 0.5);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                      "setpoint", 1, "gain", 2, "reset", 100, "action", "direct", "limits", [0 1.2]);
+%! warning ("off", "vesselnet:saturated", "local");
+%! op = vn_steady (net);
+%! assert (op.saturated, {"LC1"});
+%! assert (op.LC1.output, 1, 1e-9);
+%! h = (0.005 * 3600 / 30) ^ 2 * 1e5 / (999.1 * net.options.gravity);
+%! assert (op.T1.level, h, 1e-6 * h);
+%! net.units(net.index.F1).par.flow = 0.002;
+%! op = vn_steady (net);
+%! assert (op.saturated, cell (0, 1));
+%! assert (op.T1.level, 1, 1e-9);
+%!warning <vn_steady: controller "LC1" holds LV1.opening at its upper limit 1: T1.level settles at 3.67> ...
+%! net = vn_tank (vn_network ("w"), "T1", "area", 2, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.005);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 30, "opening", 0.5);
+%! net = vn_controller (net, "LC1", "measure", "T1.level", "manipulate", "LV1.opening", ...
+%!                      "setpoint", 1, "gain", 2, "reset", 100, "action", "direct");
+%! vn_steady (net);
 %!warning <vn_steady: input "LV1.opening" given as 1.5, outside its range \[0, 1\]; the operating point uses it clipped to 1>
 %! net = vn_feed (vn_tank (vn_network (), "T1", "area", 2, "level", 1), "F1", "T1", "flow", 0.01);
 %! vn_steady (vn_valve (net, "LV1", "T1", "", "kv", 40), "LV1.opening", 1.5);
