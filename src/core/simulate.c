@@ -79,6 +79,10 @@ typedef struct sim {
   long maxsteps;    /* steps allowed per output interval */
   outblk out;
   char cvmsg[256];  /* the integrator's own last complaint */
+  void *mem;        /* the integrator, to ask it for a fresh Jacobian */
+  double *jarea;    /* each tank's dV/dlevel where the Jacobian was taken */
+  int jtaken;       /* jarea holds values */
+  int forced;       /* a fresh Jacobian is asked for */
 } sim;
 
 /* CVODES reports trouble here instead of on stderr: the message joins
@@ -158,6 +162,53 @@ static int switch_at_root (sim *S, void *mem, double t, const double *x)
   return VN_OK;
 }
 
+/* A Jacobian kept from where a tank's level was far more sensitive to its
+ * volume (a round vessel near its apex: a flat cone's level map there is
+ * as steep as a prism of 2e-7 of its plan) overstates the stiffness by
+ * that factor once the tank has refilled.  CVODES keeps a Jacobian up to
+ * 51 steps and detects one that understates (Newton diverges), not one
+ * that overstates: the Newton corrections then come out too small by the
+ * same factor, pass the convergence test on their size, and the step
+ * follows its predictor instead of the balances (a flat cone near empty
+ * went 1.1e-5 m below empty and its neighbour's volume ended 0.72 m3
+ * wrong, property suite seed 560).  So when a tank's dV/dlevel has grown
+ * JAC_STALE-fold since the Jacobian was taken, the next step takes a
+ * fresh one (and a fresh iteration matrix); the defaults come back once
+ * it is taken.  A prism never asks; a cone filling from its apex to its
+ * rim asks a handful of times. */
+#define JAC_STALE 4.0
+#define MSBJ_DEFAULT 51   /* SUNDIALS' own defaults (memory) */
+#define MSBP_DEFAULT 20
+
+static void jac_taken (sim *S)
+{
+  vn_net *net = S->net;
+  for (int i = 0; i < net->nu; i++)
+    S->jarea[i] = net->nd[i].istank ? net->nd[i].area : 0;
+  S->jtaken = 1;
+  if (S->forced)
+    {
+      CVodeSetJacEvalFrequency (S->mem, MSBJ_DEFAULT);
+      CVodeSetLSetupFrequency (S->mem, MSBP_DEFAULT);
+      S->forced = 0;
+    }
+}
+
+static void jac_check (sim *S)
+{
+  vn_net *net = S->net;
+  if (!S->jtaken || S->forced || !S->mem)
+    return;
+  for (int i = 0; i < net->nu; i++)
+    if (net->nd[i].istank && net->nd[i].area > JAC_STALE * S->jarea[i])
+      {
+        CVodeSetJacEvalFrequency (S->mem, 1);
+        CVodeSetLSetupFrequency (S->mem, 1);
+        S->forced = 1;
+        return;
+      }
+}
+
 static int cv_rhs (sunrealtype t, N_Vector y, N_Vector ydot, void *ud)
 {
   sim *S = ud;
@@ -173,6 +224,7 @@ static int cv_rhs (sunrealtype t, N_Vector y, N_Vector ydot, void *ud)
       S->rhs_fail = st;
       return 1;   /* recoverable: the step is retried smaller */
     }
+  jac_check (S);
   return 0;
 }
 
@@ -182,8 +234,11 @@ static int cv_jac_dense (sunrealtype t, N_Vector y, N_Vector fy,
 {
   (void) fy; (void) t1; (void) t2; (void) t3;
   sim *S = ud;
-  return vn_jac_dense (S->net, t, N_VGetArrayPointer (y),
-                       SUNDenseMatrix_Data (J)) ? 1 : 0;
+  if (vn_jac_dense (S->net, t, N_VGetArrayPointer (y),
+                    SUNDenseMatrix_Data (J)))
+    return 1;
+  jac_taken (S);
+  return 0;
 }
 
 static int cv_jac_klu (sunrealtype t, N_Vector y, N_Vector fy, SUNMatrix J,
@@ -197,8 +252,11 @@ static int cv_jac_klu (sunrealtype t, N_Vector y, N_Vector fy, SUNMatrix J,
   sunindextype *ri = SUNSparseMatrix_IndexValues (J);
   double *v = SUNSparseMatrix_Data (J);
   /* sunindextype is int64_t here; long is 64 bits on this platform */
-  return vn_jac_csc (net, t, N_VGetArrayPointer (y), &nnz, (long *) cp,
-                     (long *) ri, v) ? 1 : 0;
+  if (vn_jac_csc (net, t, N_VGetArrayPointer (y), &nnz, (long *) cp,
+                  (long *) ri, v))
+    return 1;
+  jac_taken (S);
+  return 0;
 }
 
 /* Forward sensitivity right-hand side: dS/dt = J S + df/dp, from the
@@ -627,6 +685,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
     }
   S.sw = malloc ((size_t) (S.nsw + 1) * sizeof *S.sw);
   S.scratch = malloc ((size_t) net->nx * sizeof *S.scratch);
+  S.jarea = malloc ((size_t) (net->nu + 1) * sizeof *S.jarea);
   /* an output block of about 4 MB, 1 to 64 times */
   S.out.X = X;
   S.out.Y = Y;
@@ -638,7 +697,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
   S.out.cap = S.out.cap < 1 ? 1 : S.out.cap > 64 ? 64 : S.out.cap;
   S.out.xb = malloc ((size_t) S.out.cap * (S.out.nx + 1) * sizeof (double));
   S.out.yb = malloc ((size_t) S.out.cap * (S.out.ny + 1) * sizeof (double));
-  if (!S.sw || !S.scratch || !S.out.xb || !S.out.yb)
+  if (!S.sw || !S.scratch || !S.jarea || !S.out.xb || !S.out.yb)
     {
       st = vn_fail (net, VN_ENOMEM, "simulate: out of memory");
       goto done;
@@ -683,6 +742,7 @@ int vn_simulate_sens (vn_net *net, const double *x0, int nt,
       st = vn_fail (net, VN_ENOMEM, "simulate: cannot create CVODES");
       goto done;
     }
+  S.mem = mem;
   if ((flag = CVodeInit (mem, cv_rhs, tout[0], y)) != CV_SUCCESS
       || (flag = (atol > 0 ? CVodeSStolerances (mem, rtol, atol)
                            : CVodeSVtolerances (mem, rtol, atolv)))
@@ -823,6 +883,7 @@ done:
   free (S.rec.unit);
   free (S.sw);
   free (S.scratch);
+  free (S.jarea);
   free (S.out.xb);
   free (S.out.yb);
   return st;
