@@ -305,6 +305,29 @@
 %! [msg, id] = lastwarn ();
 %! assert (isempty (strfind (lower ([msg id]), "singular")), msg);
 
+%!test
+%! ## A cascade on the filler: LC2 on the sphere's level sets the flow
+%! ## setpoint of FC2, which moves LV2 (declared inner first, as the
+%! ## builders need).  Integral action in both: the level's gain to the
+%! ## feed is 0, the flow setpoint follows the feed one for one, the level
+%! ## follows its setpoint one for one; all as two vn_steady points say.
+%! net = juice_line (false);
+%! net = vn_controller (net, "FC2", "measure", "LV2.flow", "manipulate", "LV2.opening", ...
+%!                      "setpoint", 0.010, "gain", 20, "reset", 5, "limits", [0 1]);
+%! net = vn_controller (net, "LC2", "measure", "SB1.level", "manipulate", "FC2.setpoint", ...
+%!                      "setpoint", 0.9, "gain", 0.01, "reset", 600, "action", "direct", "limits", [0 0.03]);
+%! op = vn_steady (net);
+%! assert ([op.SB1.level op.LV2.flow op.LC2.output], [0.9 0.010 0.010], 1e-9);
+%! ins = {"F1.flow", "LC2.setpoint"};
+%! outs = {"SB1.level", "LC2.output", "FC2.output", "RT1.level"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs));
+%! assert (lin.gain(1:2,:), [0 1; 1 0], 1e-9);
+%! ## a setpoint step is followed in the run: back within 1 mm in 1.5 h
+%! res = vn_simulate (net, 0:60:5400, vn_signal ("LC2.setpoint", "step", 60, 0.9, 1.0), "initial", op);
+%! assert (res.SB1.level(end), 1.0, 1e-3);
+%! assert (res.LV2.flow(end), 0.010, 1e-5);
+
 ## ---------------------------------------------------------------- item 2
 
 %!test
@@ -640,6 +663,19 @@
 %!     assert (err.identifier, "Octave:invalid-input-arg");
 %!     assert (regexp (err.message, ['^vn_tank: tank "CT1": ' bad{i,2}], "once"), 1, err.message);
 %!   end_try_catch
+%! endfor
+%! ## nor is a round vessel given a rim above its top (Inf included)
+%! for geo = {{"shape", "sphere", "diameter", 1.8}, {"shape", "cone", "diameter", 1.6, "height", 2}, ...
+%!          {"shape", "horizontal", "diameter", 2.4, "length", 6}}
+%!   for rim = [Inf 3]
+%!     try
+%!       vn_tank (n, "SB1", geo{1}{:}, "rim", rim);
+%!       error ("no refusal");
+%!     catch err
+%!       assert (err.identifier, "Octave:invalid-input-arg");
+%!       assert (regexp (err.message, '^vn_tank: tank "SB1": RIM .*top', "once"), 1, err.message);
+%!     end_try_catch
+%!   endfor
 %! endfor
 
 ## ---------------------------------------------------------------- item 8
