@@ -136,6 +136,13 @@ function est = vn_fit (net, ex, params, varargin)
   isunit = strcmp ({P.type}, "unit");
   E = fit_classify (net, ex, {P(isunit).q});
   check_starting_levels (P, E);
+  ## a recorded position past its travel (an opening logged at 1.02) is
+  ## clipped in the model, as in the plant: say so once per test
+  for k = 1:numel (E)
+    sig = vn_pack_signals (net, E(k).u, "vn_fit");
+    signal_clip_warn ("vn_fit", sig.clips, E(k).t(1), E(k).t(end),
+                      sprintf ("in the model fitted to test %d", k));
+  endfor
   so = struct ("reltol", opt.reltol, "abstol", opt.abstol, "solver", 0,
                "maxsteps", 100000, "maxstep", 0);
 
@@ -394,3 +401,14 @@ endfunction
 %!error <"lower" must be a scalar or 1 bounds> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", [1 2])
 %!error <bounds must satisfy lower < upper> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "lower", 1, "upper", 0.5)
 %!error <"verbose" must be true or false> vn_fit (one_tank (0.003, 1.5), ex, "O1.coeff", "verbose", "yes")
+
+## A valve opening logged past its travel (1.02) is clipped in the model,
+## with a warning naming the signal and the test.
+%!warning <vn_fit: signal "LV1.opening" reaches 1.02 at t = 300 s, outside its range \[0, 1\]; it is clipped to \[0, 1\] in the model fitted to test 1> ...
+%! net = vn_tank (vn_network ("w"), "T1", "area", 1, "level", 1);
+%! net = vn_feed (net, "F1", "T1", "flow", 0.002);
+%! net = vn_valve (net, "LV1", "T1", "", "kv", 20, "opening", 0.5);
+%! t = (0:30:600).';
+%! op = 0.5 + 0.52 * (t >= 300);
+%! ex = vn_experiment (t, "LV1.opening", op, "T1.level", ones (size (t)), "hold", true);
+%! vn_fit (net, ex, {"T1.area"}, "maxiter", 2);

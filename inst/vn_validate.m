@@ -74,6 +74,11 @@ function val = vn_validate (est, ex, varargin)
     sens = est.sensors;
   endif
   E = fit_classify (net, ex, {});
+  for k = 1:numel (E)
+    sig = vn_pack_signals (net, E(k).u, "vn_validate");
+    signal_clip_warn ("vn_validate", sig.clips, E(k).t(1), E(k).t(end),
+                      sprintf ("in the model's prediction of test %d", k));
+  endfor
   val = struct ("t", {}, "names", {}, "measured", {}, "predicted", {},
                 "residuals", {}, "censored", {}, "units", {}, "name", {},
                 "rmse", {}, "r2", {});

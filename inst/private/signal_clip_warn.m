@@ -1,13 +1,15 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{n} =} signal_clip_warn (@var{fn}, @var{clips}, @var{t0}, @var{tf})
+## @deftypefn {} {@var{n} =} signal_clip_warn (@var{fn}, @var{clips}, @var{t0}, @var{tf}, @var{where})
 ## Warn (id @qcode{"vesselnet:clipped"}) once per signal of @var{clips}
 ## (from @code{signal_range}) that leaves its input's range within the run
 ## [@var{t0}, @var{tf}]: the signal, the largest (or smallest) value it
-## reaches there and when, and the range it is clipped to.  Returns the
-## number of warnings.
+## reaches there and when, and the range it is clipped to.  @var{where}
+## ends the message: where the clipped signal acts (default: the physics
+## and the result of a simulation).  Returns the number of warnings.
 ## @end deftypefn
 
-function n = signal_clip_warn (fn, clips, t0, tf)
+function n = signal_clip_warn (fn, clips, t0, tf,
+                               where = "in the physics and in the result (res.signals keeps it as given)")
   n = 0;
   for i = 1:numel (clips)
     c = clips(i);
@@ -30,8 +32,8 @@ function n = signal_clip_warn (fn, clips, t0, tf)
       continue;
     endif
     warning ("vesselnet:clipped",
-             "%s: signal \"%s\" %s, outside its range [%.6g, %.6g]; it is clipped to [%.6g, %.6g] in the physics and in the result (res.signals keeps it as given)",
-             fn, c.name, strjoin (what, " and "), c.lo, c.hi, c.lo, c.hi);
+             "%s: signal \"%s\" %s, outside its range [%.6g, %.6g]; it is clipped to [%.6g, %.6g] %s",
+             fn, c.name, strjoin (what, " and "), c.lo, c.hi, c.lo, c.hi, where);
     n++;
   endfor
 endfunction

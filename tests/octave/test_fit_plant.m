@@ -351,4 +351,4 @@
 %!error <"starts" must be a whole number> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "T1.level", ones (1, 11)), {"O1.coeff"}, "starts", 0)
 %!error <option "bounds" must be a 1x2 matrix> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "T1.level", ones (1, 11)), {"O1.coeff"}, "bounds", [1 2 3])
 %!error <option "bounds" for O1.coeff must be \[LOW HIGH\] with LOW < HIGH> vn_fit (pair (0.003, 0.0025, 1), vn_experiment (0:10, "T1.level", ones (1, 11)), {"O1.coeff"}, "bounds", {"O1.coeff", [2 1]})
-%!error <the model cannot be run at the starting values> vn_fit (lab (1e-4, 2e-4, 0.1, 0.6), vn_experiment (0:10, "F1.flow", 2e6 * ones (1, 11), "T1.level", ones (1, 11), "start", "declared"), {"O1.coeff"})
+%!error <vn_fit: signal "F1.flow": values must lie in \[-1e\+06, 1e\+06\] \(m3/s\), got 2e\+06 at t = 0 s> vn_fit (lab (1e-4, 2e-4, 0.1, 0.6), vn_experiment (0:10, "F1.flow", 2e6 * ones (1, 11), "T1.level", ones (1, 11), "start", "declared"), {"O1.coeff"})
