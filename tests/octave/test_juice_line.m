@@ -459,6 +459,31 @@
 %! assert (res.SB1.level, op.SB1.level * ones (size (res.t)), 1e-6);
 
 %!test
+%! ## Temperatures and concentrations get tolerances of their own: a
+%! ## 2 L holding cell heated by 2 kW beside a 1e4 m2 juice reservoir in
+%! ## one thermal network with a species.  Constant volume, throughflow F:
+%! ## T = T_inf + (T0 - T_inf) exp(-t/tau), T_inf = T_in + Q / (rho cp F),
+%! ## c = c_in (1 - exp(-t/tau)), tau = V / F (well-mixed tank balances;
+%! ## memory).  Density and heat capacity of juice invented.
+%! rho = 1045;  cp = 3900;  F = 1e-4;  V = 0.01 * 0.2;
+%! n = vn_network ("invented pasteuriser holding cell", "thermal", true, "density", rho, ...
+%!                 "cp", cp, "species", {"brix"}, "ambient", 20);
+%! n = vn_tank (n, "HC1", "area", 0.01, "level", 0.2, "temperature", 4, "brix", 0);
+%! n = vn_tank (n, "JR1", "area", 1e4, "level", 2, "temperature", 20, "brix", 12);
+%! n = vn_feed (n, "F1", "HC1", "flow", F, "temperature", 4, "brix", 11.5);
+%! n = vn_heater (n, "H1", "HC1", "duty", 2000);
+%! n = vn_pump (n, "P1", "HC1", "JR1", "flow", F);
+%! n = vn_pump (n, "P2", "JR1", "", "flow", F);
+%! res = vn_simulate (n, (0:5:300)');
+%! tau = V / F;
+%! Tinf = 4 + 2000 / (rho * cp * F);
+%! assert (res.HC1.level, 0.2 * ones (size (res.t)), 1e-12);
+%! assert (res.HC1.temperature, Tinf + (4 - Tinf) * exp (-res.t / tau), 2e-5 * Tinf);
+%! assert (res.HC1.brix, 11.5 * (1 - exp (-res.t / tau)), 2e-5 * 11.5);
+%! ## the reservoir moves by 1.7e-5 K in 5 min: it must not be disturbed more
+%! assert (res.JR1.temperature, 20 * ones (size (res.t)), 1e-4);
+
+%!test
 %! ## The rule is documented where users read it, and "abstol" stays an
 %! ## override that changes the run
 %! assert (! isempty (strfind (help ("vn_simulate"), "abstol")));
