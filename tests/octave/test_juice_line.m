@@ -305,6 +305,29 @@
 %! [msg, id] = lastwarn ();
 %! assert (isempty (strfind (lower ([msg id]), "singular")), msg);
 
+%!test
+%! ## A cascade on the filler: LC2 on the sphere's level sets the flow
+%! ## setpoint of FC2, which moves LV2 (declared inner first, as the
+%! ## builders need).  Integral action in both: the level's gain to the
+%! ## feed is 0, the flow setpoint follows the feed one for one, the level
+%! ## follows its setpoint one for one; all as two vn_steady points say.
+%! net = juice_line (false);
+%! net = vn_controller (net, "FC2", "measure", "LV2.flow", "manipulate", "LV2.opening", ...
+%!                      "setpoint", 0.010, "gain", 20, "reset", 5, "limits", [0 1]);
+%! net = vn_controller (net, "LC2", "measure", "SB1.level", "manipulate", "FC2.setpoint", ...
+%!                      "setpoint", 0.9, "gain", 0.01, "reset", 600, "action", "direct", "limits", [0 0.03]);
+%! op = vn_steady (net);
+%! assert ([op.SB1.level op.LV2.flow op.LC2.output], [0.9 0.010 0.010], 1e-9);
+%! ins = {"F1.flow", "LC2.setpoint"};
+%! outs = {"SB1.level", "LC2.output", "FC2.output", "RT1.level"};
+%! lin = vn_linearize (net, op, ins, outs);
+%! check_gains (lin.gain, steady_diff (net, op, ins, outs));
+%! assert (lin.gain(1:2,:), [0 1; 1 0], 1e-9);
+%! ## a setpoint step is followed in the run: back within 1 mm in 1.5 h
+%! res = vn_simulate (net, 0:60:5400, vn_signal ("LC2.setpoint", "step", 60, 0.9, 1.0), "initial", op);
+%! assert (res.SB1.level(end), 1.0, 1e-3);
+%! assert (res.LV2.flow(end), 0.010, 1e-5);
+
 ## ---------------------------------------------------------------- item 2
 
 %!test
@@ -434,6 +457,31 @@
 %! assert (res.WR1.level, hwr, 1e-5 * 0.8);    # reltol 1e-6, global error
 %! ## the rest of the line stays at its operating point
 %! assert (res.SB1.level, op.SB1.level * ones (size (res.t)), 1e-6);
+
+%!test
+%! ## Temperatures and concentrations get tolerances of their own: a
+%! ## 2 L holding cell heated by 2 kW beside a 1e4 m2 juice reservoir in
+%! ## one thermal network with a species.  Constant volume, throughflow F:
+%! ## T = T_inf + (T0 - T_inf) exp(-t/tau), T_inf = T_in + Q / (rho cp F),
+%! ## c = c_in (1 - exp(-t/tau)), tau = V / F (well-mixed tank balances;
+%! ## memory).  Density and heat capacity of juice invented.
+%! rho = 1045;  cp = 3900;  F = 1e-4;  V = 0.01 * 0.2;
+%! n = vn_network ("invented pasteuriser holding cell", "thermal", true, "density", rho, ...
+%!                 "cp", cp, "species", {"brix"}, "ambient", 20);
+%! n = vn_tank (n, "HC1", "area", 0.01, "level", 0.2, "temperature", 4, "brix", 0);
+%! n = vn_tank (n, "JR1", "area", 1e4, "level", 2, "temperature", 20, "brix", 12);
+%! n = vn_feed (n, "F1", "HC1", "flow", F, "temperature", 4, "brix", 11.5);
+%! n = vn_heater (n, "H1", "HC1", "duty", 2000);
+%! n = vn_pump (n, "P1", "HC1", "JR1", "flow", F);
+%! n = vn_pump (n, "P2", "JR1", "", "flow", F);
+%! res = vn_simulate (n, (0:5:300)');
+%! tau = V / F;
+%! Tinf = 4 + 2000 / (rho * cp * F);
+%! assert (res.HC1.level, 0.2 * ones (size (res.t)), 1e-12);
+%! assert (res.HC1.temperature, Tinf + (4 - Tinf) * exp (-res.t / tau), 2e-5 * Tinf);
+%! assert (res.HC1.brix, 11.5 * (1 - exp (-res.t / tau)), 2e-5 * 11.5);
+%! ## the reservoir moves by 1.7e-5 K in 5 min: it must not be disturbed more
+%! assert (res.JR1.temperature, 20 * ones (size (res.t)), 1e-4);
 
 %!test
 %! ## The rule is documented where users read it, and "abstol" stays an
@@ -640,6 +688,19 @@
 %!     assert (err.identifier, "Octave:invalid-input-arg");
 %!     assert (regexp (err.message, ['^vn_tank: tank "CT1": ' bad{i,2}], "once"), 1, err.message);
 %!   end_try_catch
+%! endfor
+%! ## nor is a round vessel given a rim above its top (Inf included)
+%! for geo = {{"shape", "sphere", "diameter", 1.8}, {"shape", "cone", "diameter", 1.6, "height", 2}, ...
+%!          {"shape", "horizontal", "diameter", 2.4, "length", 6}}
+%!   for rim = [Inf 3]
+%!     try
+%!       vn_tank (n, "SB1", geo{1}{:}, "rim", rim);
+%!       error ("no refusal");
+%!     catch err
+%!       assert (err.identifier, "Octave:invalid-input-arg");
+%!       assert (regexp (err.message, '^vn_tank: tank "SB1": RIM .*top', "once"), 1, err.message);
+%!     end_try_catch
+%!   endfor
 %! endfor
 
 ## ---------------------------------------------------------------- item 8
