@@ -73,10 +73,9 @@ function val = vn_validate (est, ex, varargin)
   if (isfield (est, "sensors"))
     sens = est.sensors;
   endif
-  E = fit_classify (net, ex, {});
+  E = fit_classify (net, ex, {}, "vn_validate");
   for k = 1:numel (E)
-    sig = vn_pack_signals (net, E(k).u, "vn_validate");
-    signal_clip_warn ("vn_validate", sig.clips, E(k).t(1), E(k).t(end),
+    signal_clip_warn ("vn_validate", E(k).clips, E(k).t(1), E(k).t(end),
                       sprintf ("in the model's prediction of test %d", k));
   endfor
   val = struct ("t", {}, "names", {}, "measured", {}, "predicted", {},

@@ -1,5 +1,5 @@
 ## -*- texinfo -*-
-## @deftypefn {} {@var{E} =} fit_classify (@var{net}, @var{ex}, @var{pq})
+## @deftypefn {} {@var{E} =} fit_classify (@var{net}, @var{ex}, @var{pq}, @var{fn})
 ## Resolve the quantities of each experiment against the network for
 ## vn_fit: inputs (input parameters of their unit) become signals, the
 ## rest must be outputs of their unit.  @var{pq} are the fitted
@@ -9,13 +9,18 @@
 ## of outputs are NaN in @code{y} (no part in the fit) and kept in
 ## @code{ymeas} with the mask @code{cens}.  @code{inputs} and
 ## @code{readings} say, per quantity, what was decided and counted.
+## The input signals are packed once for the core (@code{sig},
+## @code{vn_pack_signals}, under the command name @var{fn}, default
+## @qcode{"vn_fit"}); @code{clips} holds those clipped to their travel
+## (empty when none).
 ## @end deftypefn
 
-function E = fit_classify (net, ex, pq)
+function E = fit_classify (net, ex, pq, fn = "vn_fit")
   s = vn_schema ();
   E = struct ("t", {}, "name", {}, "u", {}, "u0", {}, "yname", {},
               "yidx", {}, "y", {}, "ymeas", {}, "cens", {}, "w", {},
-              "start", {}, "levels", {}, "inputs", {}, "readings", {});
+              "start", {}, "levels", {}, "inputs", {}, "readings", {},
+              "sig", {}, "clips", {});
   for k = 1:numel (ex)
     x = ex(k);
     who = sprintf ("vn_fit: experiment %d", k);
@@ -109,10 +114,17 @@ function E = fit_classify (net, ex, pq)
                        "quantity", yname, "used", num2cell (sum (! isnan (y), 1)),
                        "censored", num2cell (sum (yc, 1)),
                        "missing", num2cell (sum (isnan (ymeas), 1)));
+    ## the signals do not depend on the parameters fitted: packed once
+    sig = vn_pack_signals (net, u, fn);
+    clips = [];
+    if (! isempty (sig))
+      clips = sig.clips;
+    endif
     E(k) = struct ("t", x.t, "name", x.name, "u", u, "u0", {u0},
                    "yname", {yname}, "yidx", int32 (yidx), "y", y,
                    "ymeas", ymeas, "cens", yc, "w", w, "start", x.start,
-                   "levels", levels, "inputs", inputs, "readings", readings);
+                   "levels", levels, "inputs", inputs, "readings", readings,
+                   "sig", sig, "clips", clips);
   endfor
 endfunction
 

@@ -72,7 +72,6 @@ function [Y, S] = fit_model (net, e, pq, p, so)
       endfor
     endif
   endif
-  sig = vn_pack_signals (net, e.u, "vn_fit");
   ## only the measured outputs are recorded
   o = struct ("reltol", so.reltol, "abstol", so.abstol, "solver", so.solver,
               "maxsteps", so.maxsteps, "maxstep", so.maxstep,
@@ -81,10 +80,10 @@ function [Y, S] = fit_model (net, e, pq, p, so)
     o.sens = pin;
     o.sens_x0 = sx0;
     o.sens_yout = e.yidx;
-    [~, Yall, ~, ~, ~, S] = __vn_simulate__ (pk, sig, e.t, x0, o);
+    [~, Yall, ~, ~, ~, S] = __vn_simulate__ (pk, e.sig, e.t, x0, o);
     S = reshape (S, numel (e.t), numel (e.yidx), np);
   else
-    [~, Yall] = __vn_simulate__ (pk, sig, e.t, x0, o);
+    [~, Yall] = __vn_simulate__ (pk, e.sig, e.t, x0, o);
   endif
   Y = Yall;
 endfunction
